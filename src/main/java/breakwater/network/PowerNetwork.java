@@ -1,0 +1,136 @@
+package breakwater.network;
+
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * The lumped small-signal power network of DESIGN.md §1, seen from the load:
+ * <pre>
+ * regulator ─ R_reg ─ L_reg ─┬─ board node ─ R_pkg ─ L_pkg ─┬─ load node
+ *                            │                               │
+ *                       boardBranches                   loadBranches
+ * </pre>
+ * The regulator's far end is AC ground. Without a package the load node is the board node and
+ * {@code loadBranches} is empty (the die, if any, is then one of the board branches).
+ *
+ * @param regulatorResistanceOhms R_reg &ge; 0
+ * @param regulatorInductanceH    L_reg &ge; 0 (not both zero)
+ * @param boardBranches           shunt branches at the board node: plane, bank (one branch per part type)
+ * @param hasPackage              whether a package path separates board and load node
+ * @param packageResistanceOhms   R_pkg &ge; 0
+ * @param packageInductanceH      L_pkg &ge; 0
+ * @param loadBranches            shunt branches at the load node (the die); empty without a package
+ */
+public record PowerNetwork(
+        double regulatorResistanceOhms,
+        double regulatorInductanceH,
+        List<SeriesBranch> boardBranches,
+        boolean hasPackage,
+        double packageResistanceOhms,
+        double packageInductanceH,
+        List<SeriesBranch> loadBranches) {
+
+    public PowerNetwork {
+        boardBranches = List.copyOf(boardBranches);
+        loadBranches = List.copyOf(loadBranches);
+        if (!(regulatorResistanceOhms >= 0) || !(regulatorInductanceH >= 0)
+                || (regulatorResistanceOhms == 0 && regulatorInductanceH == 0)) {
+            throw new IllegalArgumentException("regulator needs R >= 0, L >= 0, not both zero");
+        }
+        if (!(packageResistanceOhms >= 0) || !(packageInductanceH >= 0)) {
+            throw new IllegalArgumentException("package R and L must be >= 0");
+        }
+        if (!hasPackage && (!loadBranches.isEmpty() || packageResistanceOhms != 0 || packageInductanceH != 0)) {
+            throw new IllegalArgumentException("without a package the load node is the board node: "
+                    + "put every branch on the board");
+        }
+        Objects.requireNonNull(boardBranches);
+    }
+
+    /**
+     * Resistance at DC, Z(0) = R_reg + R_pkg: every shunt branch holds a capacitor, so no DC current
+     * flows in it (DESIGN.md §1).
+     */
+    public double dcResistanceOhms() {
+        return regulatorResistanceOhms + (hasPackage ? packageResistanceOhms : 0.0);
+    }
+
+    /**
+     * Whether Z(∞) is finite: a branch with a capacitance and no series inductance sits directly at the
+     * load node. Then Z(∞) is the parallel combination of those branches' resistances.
+     */
+    public boolean hasFiniteHighFrequencyLimit() {
+        return loadNodeBranches().stream().anyMatch(b -> b.inductanceH() == 0.0)
+                || (!hasPackage && regulatorInductanceH == 0.0)
+                || (hasPackage && packageInductanceH == 0.0 && boardBranches.stream().anyMatch(b -> b.inductanceH() == 0.0));
+    }
+
+    /** The branches directly at the load node (the board's when there is no package). */
+    public List<SeriesBranch> loadNodeBranches() {
+        return hasPackage ? loadBranches : boardBranches;
+    }
+
+    /**
+     * Impedance at the load node at {@code frequencyHz}, written to {@code out[0]} (real, Ω) and
+     * {@code out[1]} (imaginary, Ω). f = 0 is handled explicitly: Z(0) = R_reg + R_pkg.
+     * Admittances are summed; no complex division by zero is attempted.
+     */
+    public void impedance(double frequencyHz, double[] out) {
+        if (frequencyHz == 0.0) {
+            out[0] = dcResistanceOhms();
+            out[1] = 0.0;
+            return;
+        }
+        if (!(frequencyHz > 0) || !Double.isFinite(frequencyHz)) {
+            throw new IllegalArgumentException("frequency must be >= 0 and finite, got " + frequencyHz);
+        }
+        double w = 2 * Math.PI * frequencyHz;
+        double[] y = new double[2];
+        // regulator branch R + jωL (never zero here: R > 0 or ωL > 0)
+        double yr = 0;
+        double yi = 0;
+        {
+            double r = regulatorResistanceOhms;
+            double x = w * regulatorInductanceH;
+            double m = r * r + x * x;
+            yr += r / m;
+            yi += -x / m;
+        }
+        for (SeriesBranch b : boardBranches) {
+            b.admittance(w, y);
+            yr += y[0];
+            yi += y[1];
+        }
+        double zr;
+        double zi;
+        {
+            double m = yr * yr + yi * yi;
+            zr = yr / m;
+            zi = -yi / m;
+        }
+        if (hasPackage) {
+            zr += packageResistanceOhms;
+            zi += w * packageInductanceH;
+            double m = zr * zr + zi * zi;
+            yr = zr / m;
+            yi = -zi / m;
+            for (SeriesBranch b : loadBranches) {
+                b.admittance(w, y);
+                yr += y[0];
+                yi += y[1];
+            }
+            m = yr * yr + yi * yi;
+            zr = yr / m;
+            zi = -yi / m;
+        }
+        out[0] = zr;
+        out[1] = zi;
+    }
+
+    /** |Z| at the load node, Ω. */
+    public double magnitude(double frequencyHz) {
+        double[] z = new double[2];
+        impedance(frequencyHz, z);
+        return Math.hypot(z[0], z[1]);
+    }
+}

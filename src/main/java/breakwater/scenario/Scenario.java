@@ -1,0 +1,66 @@
+package breakwater.scenario;
+
+import java.nio.file.Path;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+
+/**
+ * A rail scenario as read from its TOML file (DESIGN.md §2).
+ *
+ * @param source        the scenario file as the user named it (for messages)
+ * @param rail          electrical spec
+ * @param band          band where flatness and target are judged
+ * @param regulator     regulator output impedance
+ * @param plane         plane capacitance, or {@link Plane#NONE}
+ * @param packagePath   package path to the load, or {@link PackagePath#NONE}
+ * @param die           die capacitance, or {@link Die#NONE}
+ * @param catalogFile   catalog path, already resolved against the scenario's folder
+ * @param board         board limits
+ * @param footprints    named layout options, in file order
+ * @param cost          extra costs
+ * @param solver        search settings
+ * @param requireTarget also hold |Z| under the target impedance in the band
+ * @param existingBankFile bank to cost down, resolved against the scenario's folder, or "" for none
+ */
+public record Scenario(
+        String source,
+        Rail rail,
+        Band band,
+        Regulator regulator,
+        Plane plane,
+        PackagePath packagePath,
+        Die die,
+        Path catalogFile,
+        Board board,
+        Map<String, Footprint> footprints,
+        CostModel cost,
+        SolverSettings solver,
+        boolean requireTarget,
+        String existingBankFile) {
+
+    public Scenario {
+        Objects.requireNonNull(source, "source");
+        Objects.requireNonNull(rail, "rail");
+        Objects.requireNonNull(band, "band");
+        Objects.requireNonNull(regulator, "regulator");
+        Objects.requireNonNull(plane, "plane");
+        Objects.requireNonNull(packagePath, "packagePath");
+        Objects.requireNonNull(die, "die");
+        Objects.requireNonNull(catalogFile, "catalogFile");
+        Objects.requireNonNull(board, "board");
+        Objects.requireNonNull(cost, "cost");
+        Objects.requireNonNull(solver, "solver");
+        Objects.requireNonNull(existingBankFile, "existingBankFile");
+        // keep file order: the reader passes a LinkedHashMap; copy defensively but in order
+        footprints = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(footprints));
+    }
+
+    public Optional<Path> existingBank() {
+        return existingBankFile.isEmpty() ? Optional.empty() : Optional.of(Path.of(existingBankFile));
+    }
+
+    public Optional<Footprint> footprint(String name) {
+        return Optional.ofNullable(footprints.get(name));
+    }
+}
