@@ -1,0 +1,45 @@
+package breakwater.network;
+
+import breakwater.catalog.BankEntry;
+import breakwater.scenario.Footprint;
+import breakwater.scenario.Scenario;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+/** Builds the {@link PowerNetwork} of a scenario with a given bank (DESIGN.md §1). */
+public final class NetworkBuilder {
+    private NetworkBuilder() {
+    }
+
+    /**
+     * The network of {@code scenario} with {@code bank} on the board node, mounting inductances taken from
+     * {@code footprint} where it lists a part's case. The plane sits at the board node; the die at the load
+     * node behind the package, or at the board node when there is no package.
+     */
+    public static PowerNetwork build(Scenario scenario, List<BankEntry> bank, Optional<Footprint> footprint) {
+        List<SeriesBranch> board = new ArrayList<>();
+        List<SeriesBranch> load = new ArrayList<>();
+        if (scenario.plane().isPresent()) {
+            board.add(new SeriesBranch("plane", scenario.plane().resistanceOhms(), 0.0,
+                    scenario.plane().capacitanceF()));
+        }
+        for (BankEntry e : bank) {
+            if (e.count() > 0) {
+                board.add(PartBranches.single(e.part(), footprint).parallel(e.count()));
+            }
+        }
+        boolean hasPackage = scenario.packagePath().present();
+        if (scenario.die().isPresent()) {
+            SeriesBranch die = new SeriesBranch("die", scenario.die().resistanceOhms(), 0.0,
+                    scenario.die().capacitanceF());
+            (hasPackage ? load : board).add(die);
+        }
+        return new PowerNetwork(scenario.regulator().resistanceOhms(), scenario.regulator().inductanceH(),
+                board, hasPackage,
+                hasPackage ? scenario.packagePath().resistanceOhms() : 0.0,
+                hasPackage ? scenario.packagePath().inductanceH() : 0.0,
+                load);
+    }
+}
