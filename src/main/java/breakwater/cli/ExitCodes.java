@@ -1,0 +1,20 @@
+package breakwater.cli;
+
+/** Process exit codes (DESIGN.md §4), shown in {@code --help}. */
+public final class ExitCodes {
+    /** Success: the bank meets the spec. */
+    public static final int OK = 0;
+    /** Ran, but no bank meets the spec (the closest one is still reported). */
+    public static final int SPEC_NOT_MET = 1;
+    /** Bad command line. */
+    public static final int USAGE = 2;
+    /** An input file is invalid. */
+    public static final int INVALID_INPUT = 3;
+    /** Reading or writing a file failed. */
+    public static final int IO_ERROR = 4;
+    /** A bug in Breakwater: the only case that prints a stack trace. */
+    public static final int INTERNAL = 70;
+
+    private ExitCodes() {
+    }
+}

@@ -1,0 +1,35 @@
+package breakwater.design;
+
+import breakwater.network.ImpedanceCurve;
+import breakwater.network.ImpedanceMetrics;
+import breakwater.network.PowerNetwork;
+
+import java.util.List;
+
+/**
+ * Everything the tool knows about one bank on one rail: the single verdict used by {@code check},
+ * {@code solve} and the reports alike.
+ *
+ * @param bank        the bank judged
+ * @param network     its circuit
+ * @param curve       |Z| at the load node on the report grid
+ * @param impedance   flatness and anti-resonances in the band
+ * @param cost        cost per board
+ * @param board       board limits broken (empty when the bank fits)
+ */
+public record Evaluation(
+        CapacitorBank bank,
+        PowerNetwork network,
+        ImpedanceCurve curve,
+        ImpedanceMetrics impedance,
+        CostBreakdown cost,
+        List<BoardCheck.Violation> board) {
+
+    public Evaluation {
+        board = List.copyOf(board);
+    }
+
+    public boolean fitsBoard() {
+        return board.isEmpty();
+    }
+}

@@ -1,0 +1,82 @@
+package breakwater.report;
+
+import breakwater.catalog.BankEntry;
+import breakwater.design.BoardCheck;
+import breakwater.design.Evaluation;
+import breakwater.network.AntiResonance;
+import breakwater.scenario.Rail;
+import breakwater.scenario.Scenario;
+
+import java.util.Locale;
+
+import static breakwater.units.EngineeringNotation.format;
+import static breakwater.units.Quantity.CURRENT;
+import static breakwater.units.Quantity.FREQUENCY;
+import static breakwater.units.Quantity.FRACTION;
+import static breakwater.units.Quantity.RESISTANCE;
+import static breakwater.units.Quantity.TIME;
+import static breakwater.units.Quantity.VOLTAGE;
+
+/** The human-readable summary printed on the console. */
+public final class ConsoleReport {
+    private ConsoleReport() {
+    }
+
+    public static String render(Scenario scenario, String footprintName, Evaluation e) {
+        StringBuilder b = new StringBuilder();
+        Rail r = scenario.rail();
+        String currency = scenario.cost().currency();
+        line(b, "Rail", r.name().isEmpty() ? scenario.source() : r.name());
+        line(b, "", format(r.voltageV(), VOLTAGE, 4) + " ± " + format(r.toleranceFraction(), FRACTION)
+                + " (" + format(r.lowerLimitV(), VOLTAGE, 4) + " .. " + format(r.upperLimitV(), VOLTAGE, 4) + "), load "
+                + format(r.minCurrentA(), CURRENT) + " .. " + format(r.maxCurrentA(), CURRENT) + " (ΔI "
+                + format(r.currentStepA(), CURRENT) + "), "
+                + (r.hasEdgeTime() ? "edge time " + format(r.edgeTimeS(), TIME) : "ideal edges"));
+        line(b, "Target", "Z_t = " + format(r.targetImpedanceOhms(), RESISTANCE) + "  (V × tolerance / ΔI)");
+        if (!footprintName.isEmpty()) {
+            line(b, "Footprint", footprintName);
+        }
+        b.append('\n');
+        b.append(String.format(Locale.ROOT, "  %-24s %-6s %6s %10s %12s%n", "part", "case", "count", "unit", "extended"));
+        for (BankEntry be : e.bank().entries()) {
+            b.append(String.format(Locale.ROOT, "  %-24s %-6s %6d %10s %12s%n", be.part().name(), be.part().caseCode(),
+                    be.count(), money(be.part().unitCost()), money(be.part().unitCost() * be.count())));
+        }
+        if (e.bank().entries().isEmpty()) {
+            b.append("  (empty bank)\n");
+        }
+        b.append(String.format(Locale.ROOT, "  %-24s %-6s %6d %10s %12s%n", "total", "", e.bank().totalParts(), "",
+                money(e.cost().total())));
+        line(b, "Cost", money(e.cost().total()) + (currency.isEmpty() ? "" : " " + currency) + " per board (parts "
+                + money(e.cost().partsCost()) + ", placement " + money(e.cost().placementCost()) + ", line items "
+                + money(e.cost().lineItemCost()) + "); " + e.bank().totalParts() + " parts, "
+                + e.bank().distinctParts() + " distinct");
+        for (BoardCheck.Violation v : e.board()) {
+            line(b, "Board", "LIMIT BROKEN: " + v.describe());
+        }
+        b.append('\n');
+        var m = e.impedance();
+        line(b, "Impedance", "peak " + format(m.peakOhms(), RESISTANCE) + " at " + format(m.peakHz(), FREQUENCY)
+                + String.format(Locale.ROOT, " (%.2f × target)", m.peakOverTarget())
+                + String.format(Locale.ROOT, ", ripple %.2f dB", m.rippleDb())
+                + " over " + format(scenario.band().fromHz(), FREQUENCY) + " .. " + format(scenario.band().toHz(), FREQUENCY));
+        if (m.antiResonances().isEmpty()) {
+            line(b, "", "no anti-resonance in the band");
+        } else {
+            b.append(String.format(Locale.ROOT, "  %-14s %12s %9s %7s%n", "anti-resonance", "|Z|", "|Z|/Z_t", "Q"));
+            for (AntiResonance a : m.antiResonances()) {
+                b.append(String.format(Locale.ROOT, "  %-14s %12s %9.2f %7.2f%n", format(a.frequencyHz(), FREQUENCY, 4),
+                        format(a.impedanceOhms(), RESISTANCE), a.impedanceOhms() / m.targetOhms(), a.q()));
+            }
+        }
+        return b.toString();
+    }
+
+    static String money(double v) {
+        return String.format(Locale.ROOT, "%.4f", v);
+    }
+
+    private static void line(StringBuilder b, String head, String text) {
+        b.append(String.format(Locale.ROOT, "%-10s %s%n", head, text));
+    }
+}

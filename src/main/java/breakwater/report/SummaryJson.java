@@ -1,0 +1,103 @@
+package breakwater.report;
+
+import breakwater.catalog.BankEntry;
+import breakwater.design.BoardCheck;
+import breakwater.design.Evaluation;
+import breakwater.network.AntiResonance;
+import breakwater.scenario.Rail;
+import breakwater.scenario.Scenario;
+import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+
+import java.io.IOException;
+import java.io.Writer;
+
+/**
+ * summary.json (DESIGN.md §3): the machine-readable result. Numbers are SI, full double precision,
+ * locale-independent.
+ */
+public final class SummaryJson {
+    private static final ObjectMapper MAPPER = new ObjectMapper()
+            .enable(SerializationFeature.INDENT_OUTPUT)
+            .disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
+
+    private SummaryJson() {
+    }
+
+    public static ObjectMapper mapper() {
+        return MAPPER;
+    }
+
+    /** The keys common to every mode: rail, impedance, bank, cost. */
+    public static ObjectNode of(String mode, Scenario scenario, String footprintName, Evaluation e) {
+        ObjectNode root = MAPPER.createObjectNode();
+        root.put("mode", mode);
+        root.put("scenario", scenario.source());
+        root.put("footprint", footprintName);
+        Rail r = scenario.rail();
+        ObjectNode rail = root.putObject("rail");
+        rail.put("name", r.name());
+        rail.put("voltage_v", r.voltageV());
+        rail.put("tolerance", r.toleranceFraction());
+        rail.put("min_current_a", r.minCurrentA());
+        rail.put("max_current_a", r.maxCurrentA());
+        rail.put("current_step_a", r.currentStepA());
+        rail.put("edge_time_s", r.edgeTimeS());
+        rail.put("target_impedance_ohm", r.targetImpedanceOhms());
+        rail.put("lower_limit_v", r.lowerLimitV());
+        rail.put("upper_limit_v", r.upperLimitV());
+        ObjectNode band = root.putObject("band");
+        band.put("from_hz", scenario.band().fromHz());
+        band.put("to_hz", scenario.band().toHz());
+
+        var m = e.impedance();
+        ObjectNode imp = root.putObject("impedance");
+        imp.put("peak_ohm", m.peakOhms());
+        imp.put("peak_hz", m.peakHz());
+        imp.put("peak_over_target", m.peakOverTarget());
+        imp.put("min_ohm", m.minOhms());
+        imp.put("min_hz", m.minHz());
+        imp.put("ripple_db", m.rippleDb());
+        imp.put("dc_resistance_ohm", e.network().dcResistanceOhms());
+        ArrayNode ar = root.putArray("anti_resonances");
+        for (AntiResonance a : m.antiResonances()) {
+            ObjectNode o = ar.addObject();
+            o.put("frequency_hz", a.frequencyHz());
+            o.put("impedance_ohm", a.impedanceOhms());
+            o.put("q", a.q());
+            o.put("over_target", a.impedanceOhms() / m.targetOhms());
+        }
+        ArrayNode bank = root.putArray("bank");
+        for (BankEntry be : e.bank().entries()) {
+            ObjectNode o = bank.addObject();
+            o.put("part", be.part().name());
+            o.put("count", be.count());
+            o.put("case", be.part().caseCode());
+            o.put("unit_cost", be.part().unitCost());
+        }
+        root.put("cost_total", e.cost().total());
+        ObjectNode cost = root.putObject("cost");
+        cost.put("parts", e.cost().partsCost());
+        cost.put("placement", e.cost().placementCost());
+        cost.put("line_items", e.cost().lineItemCost());
+        cost.put("currency", scenario.cost().currency());
+        root.put("total_parts", e.bank().totalParts());
+        root.put("distinct_parts", e.bank().distinctParts());
+        ArrayNode board = root.putArray("board_violations");
+        for (BoardCheck.Violation v : e.board()) {
+            ObjectNode o = board.addObject();
+            o.put("limit", v.limit());
+            o.put("allowed", v.allowed());
+            o.put("actual", v.actual());
+        }
+        return root;
+    }
+
+    public static void write(ObjectNode root, Writer w) throws IOException {
+        MAPPER.writeValue(w, root);
+        w.write("\n");
+    }
+}
