@@ -1,0 +1,199 @@
+package breakwater.optimize;
+
+import ai.timefold.solver.core.api.score.BendableScore;
+import ai.timefold.solver.core.api.solver.Solver;
+import ai.timefold.solver.core.api.solver.SolverFactory;
+import ai.timefold.solver.core.config.heuristic.selector.move.composite.UnionMoveSelectorConfig;
+import ai.timefold.solver.core.config.heuristic.selector.move.factory.MoveListFactoryConfig;
+import ai.timefold.solver.core.config.heuristic.selector.move.generic.ChangeMoveSelectorConfig;
+import ai.timefold.solver.core.config.heuristic.selector.move.generic.SwapMoveSelectorConfig;
+import ai.timefold.solver.core.config.localsearch.LocalSearchPhaseConfig;
+import ai.timefold.solver.core.config.localsearch.LocalSearchType;
+import ai.timefold.solver.core.config.score.director.ScoreDirectorFactoryConfig;
+import ai.timefold.solver.core.config.solver.EnvironmentMode;
+import ai.timefold.solver.core.config.solver.SolverConfig;
+import ai.timefold.solver.core.config.solver.monitoring.MonitoringConfig;
+import ai.timefold.solver.core.config.solver.termination.TerminationConfig;
+import breakwater.catalog.Part;
+import breakwater.design.BankEvaluator;
+import breakwater.design.CapacitorBank;
+import breakwater.design.Judgement;
+
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicBoolean;
+
+/**
+ * Searches part counts for the cheapest bank that meets the rail's spec, with Timefold local search.
+ *
+ * <p>Each solver starts from the given bank (empty by default), so the construction heuristic has
+ * nothing to do, and runs late acceptance over four kinds of move: the solver's change (any count in
+ * range) and swap (two types exchange counts) moves, and {@link CountMoves} (nudge a count by ±1/±3,
+ * replace a type by its neighbouring value). Several solvers with seeds seed, seed+1, … run in parallel
+ * and the best is kept (ties go to the lowest seed, so a move-limited run is reproducible).
+ *
+ * <p>No Timefold type appears in this class's public API.
+ */
+public final class BankSearch {
+    private final JudgePool pool;
+    private final List<Part> candidates;
+    private final int[] maxCounts;
+    private final AtomicBoolean stopRequested = new AtomicBoolean();
+    private final List<Solver<BankPlan>> running = new ArrayList<>();
+    private volatile long startNanos;
+    private volatile BendableScore bestScore;
+    private volatile int[] bestCounts;
+
+    /**
+     * @param evaluator  the judge
+     * @param candidates parts the search may use
+     * @param maxCounts  largest count per candidate (aligned with {@code candidates})
+     */
+    public BankSearch(BankEvaluator evaluator, List<Part> candidates, int[] maxCounts) {
+        if (candidates.size() != maxCounts.length || candidates.isEmpty()) {
+            throw new IllegalArgumentException("need one max count per candidate, and at least one candidate");
+        }
+        this.candidates = List.copyOf(candidates);
+        this.maxCounts = maxCounts.clone();
+        this.pool = new JudgePool(evaluator, this.candidates);
+    }
+
+    public List<Part> candidates() {
+        return candidates;
+    }
+
+    /** Asks every solver to stop; {@link #run} then returns the best bank found so far. */
+    public void stop() {
+        stopRequested.set(true);
+        synchronized (running) {
+            for (Solver<BankPlan> s : running) {
+                s.terminateEarly();
+            }
+        }
+    }
+
+    /** Live view of the search; safe to call from any thread. Empty best before the first score. */
+    public java.util.Optional<SearchProgress> progress() {
+        int[] counts = bestCounts;
+        if (counts == null) {
+            return java.util.Optional.empty();
+        }
+        double elapsed = (System.nanoTime() - startNanos) / 1e9;
+        return java.util.Optional.of(new SearchProgress(elapsed, CapacitorBank.of(candidates, counts),
+                pool.judge(counts), pool.evaluations()));
+    }
+
+    /** Runs the search from {@code start} (may be empty) and returns the best bank. */
+    public SearchResult run(SearchSettings settings, CapacitorBank start) {
+        startNanos = System.nanoTime();
+        int[] startCounts = start.countsFor(candidates);
+        for (int i = 0; i < startCounts.length; i++) {
+            startCounts[i] = Math.min(startCounts[i], maxCounts[i]);
+        }
+        offer(startCounts);
+        ExecutorService exec = Executors.newFixedThreadPool(settings.solvers(), r -> {
+            Thread t = new Thread(r, "breakwater-solver");
+            t.setDaemon(true);
+            return t;
+        });
+        List<Future<BankPlan>> futures = new ArrayList<>();
+        try {
+            for (int k = 0; k < settings.solvers(); k++) {
+                long seed = settings.seed() + k;
+                Solver<BankPlan> solver = SolverFactory.<BankPlan>create(config(settings, seed)).buildSolver();
+                solver.addEventListener(ev -> offer(ev.getNewBestSolution().countVector()));
+                synchronized (running) {
+                    running.add(solver);
+                    if (stopRequested.get()) {
+                        solver.terminateEarly();
+                    }
+                }
+                BankPlan problem = problem(startCounts);
+                futures.add(exec.submit(() -> solver.solve(problem)));
+            }
+            int[] best = null;
+            BendableScore bestOfAll = null;
+            for (Future<BankPlan> f : futures) {
+                BankPlan plan = f.get();
+                int[] c = plan.countVector();
+                BendableScore s = ScoreLevels.of(pool.judge(c));
+                if (bestOfAll == null || s.compareTo(bestOfAll) > 0) {
+                    bestOfAll = s;
+                    best = c;
+                }
+            }
+            // the start itself competes too (a search can only improve on it)
+            BendableScore startScore = ScoreLevels.of(pool.judge(startCounts));
+            if (startScore.compareTo(bestOfAll) > 0) {
+                best = startCounts;
+            }
+            double seconds = (System.nanoTime() - startNanos) / 1e9;
+            return new SearchResult(CapacitorBank.of(candidates, best), pool.judge(best), pool.evaluations(),
+                    seconds, settings.seed(), settings.solvers(), stopRequested.get());
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("search interrupted", e);
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof RuntimeException re) {
+                throw re;
+            }
+            throw new IllegalStateException("solver failed", cause);
+        } finally {
+            exec.shutdownNow();
+            synchronized (running) {
+                running.clear();
+            }
+        }
+    }
+
+    private synchronized void offer(int[] counts) {
+        BendableScore s = ScoreLevels.of(pool.judge(counts));
+        if (bestScore == null || s.compareTo(bestScore) > 0) {
+            bestScore = s;
+            bestCounts = counts.clone();
+        }
+    }
+
+    private BankPlan problem(int[] startCounts) {
+        List<PartCount> list = new ArrayList<>();
+        for (int i = 0; i < candidates.size(); i++) {
+            list.add(new PartCount(i, candidates.get(i), maxCounts[i], startCounts[i]));
+        }
+        return new BankPlan(pool, list);
+    }
+
+    SolverConfig config(SearchSettings settings, long seed) {
+        TerminationConfig termination = new TerminationConfig()
+                .withSpentLimit(settings.timeLimit())
+                .withUnimprovedSpentLimit(settings.unimprovedLimit());
+        if (settings.moveLimit() > 0) {
+            termination.setMoveCountLimit(settings.moveLimit());
+        }
+        UnionMoveSelectorConfig moves = new UnionMoveSelectorConfig().withMoveSelectors(
+                new ChangeMoveSelectorConfig(),
+                new SwapMoveSelectorConfig(),
+                new MoveListFactoryConfig().withMoveListFactoryClass(CountMoves.class));
+        return new SolverConfig()
+                .withSolutionClass(BankPlan.class)
+                .withEntityClasses(PartCount.class)
+                .withScoreDirectorFactory(new ScoreDirectorFactoryConfig()
+                        .withIncrementalScoreCalculatorClass(BankScoreCalculator.class))
+                .withEnvironmentMode(EnvironmentMode.NO_ASSERT)
+                .withRandomSeed(seed)
+                .withMonitoringConfig(new MonitoringConfig().withSolverMetricList(List.of()))
+                .withTerminationConfig(termination)
+                .withPhases(new LocalSearchPhaseConfig()
+                        .withLocalSearchType(LocalSearchType.LATE_ACCEPTANCE)
+                        .withMoveSelectorConfig(moves));
+    }
+
+    static Duration seconds(double s) {
+        return Duration.ofNanos((long) (s * 1e9));
+    }
+}

@@ -1,0 +1,46 @@
+package breakwater.optimize;
+
+import java.time.Duration;
+import java.util.Objects;
+
+/**
+ * How long and how widely to search.
+ *
+ * @param timeLimit        wall-clock budget for the whole search
+ * @param unimprovedLimit  stop a solver that has not improved its best for this long
+ * @param moveLimit        stop each solver after this many evaluated moves (0 = no limit); with a seed
+ *                         this makes a run reproducible
+ * @param seed             seed of the first solver; solver k uses seed + k
+ * @param solvers          independent solvers run in parallel (the free solver edition has no
+ *                         multithreaded solving, so we run several seeded ones and keep the best)
+ */
+public record SearchSettings(Duration timeLimit, Duration unimprovedLimit, long moveLimit, long seed, int solvers) {
+    public SearchSettings {
+        Objects.requireNonNull(timeLimit, "timeLimit");
+        Objects.requireNonNull(unimprovedLimit, "unimprovedLimit");
+        if (timeLimit.isZero() || timeLimit.isNegative()) {
+            throw new IllegalArgumentException("time limit must be > 0");
+        }
+        if (moveLimit < 0 || solvers < 1) {
+            throw new IllegalArgumentException("move limit >= 0 and solvers >= 1 required");
+        }
+    }
+
+    /** One solver per core (at most 4), unimproved limit a third of the time limit (at least 2 s). */
+    public static SearchSettings defaults(Duration timeLimit, long seed) {
+        int cores = Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors()));
+        Duration unimproved = timeLimit.dividedBy(3);
+        if (unimproved.compareTo(Duration.ofSeconds(2)) < 0) {
+            unimproved = timeLimit.compareTo(Duration.ofSeconds(2)) < 0 ? timeLimit : Duration.ofSeconds(2);
+        }
+        return new SearchSettings(timeLimit, unimproved, 0, seed, cores);
+    }
+
+    public SearchSettings withMoveLimit(long moves) {
+        return new SearchSettings(timeLimit, unimprovedLimit, moves, seed, solvers);
+    }
+
+    public SearchSettings withSolvers(int n) {
+        return new SearchSettings(timeLimit, unimprovedLimit, moveLimit, seed, n);
+    }
+}
