@@ -58,7 +58,7 @@ public final class BankFileReader {
                 problems.error(source, 1, 1, "the bank file is empty, it needs a header row 'part,count'"
                         + " and one row per part");
             }
-            problems.throwIfAny();
+            problems.throwIfAnyInFileOrder();
         }
         CsvTable table = read.orElseThrow();
 
@@ -84,7 +84,7 @@ public final class BankFileReader {
                         + "', a bank file has the header row 'part,count'");
             }
         }
-        problems.throwIfAny();
+        problems.throwIfAnyInFileOrder();
 
         int width = table.header.size();
         int partIndex = columns.get("part");
@@ -140,7 +140,7 @@ public final class BankFileReader {
                 entries.add(new BankEntry(part.get(), count));
             }
         }
-        problems.throwIfAny();
+        problems.throwIfAnyInFileOrder();
         return List.copyOf(entries);
     }
 }

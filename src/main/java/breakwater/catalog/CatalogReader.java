@@ -77,7 +77,7 @@ public final class CatalogReader {
                 problems.error(source, 1, 1, "the catalog is empty, it needs a header row naming the columns "
                         + String.join(", ", REQUIRED_COLUMNS) + " and one row per part");
             }
-            problems.throwIfAny();
+            problems.throwIfAnyInFileOrder();
         }
         CsvTable table = read.orElseThrow();
         Map<String, Integer> columns = readHeader(table.header, source, problems);
@@ -95,7 +95,7 @@ public final class CatalogReader {
                         "the catalog lists no parts, a catalog needs at least one row below its header");
             }
         }
-        problems.throwIfAny();
+        problems.throwIfAnyInFileOrder();
         return new Catalog(source, parts);
     }
 
