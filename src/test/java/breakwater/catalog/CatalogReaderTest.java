@@ -269,6 +269,13 @@ class CatalogReaderTest {
     }
 
     @Test
+    void windowsLineEndsDoNotShiftColumns() {
+        // RFC 4180 §2 ends records with CRLF; the CR must not count as a character of the next line
+        assertThat(onlyProblem(HEADER.replace("\n", "\r\n") + "A,1u,1m,1n,1n,1\r\nB,10nH,1m,1n,1n,1\r\n"))
+                .startsWith("parts.csv:3:3: ").contains("inductance");
+    }
+
+    @Test
     void nonUtf8FileIsAnInputProblem(@TempDir Path dir) throws IOException {
         Path file = dir.resolve("latin1.csv");
         byte[] head = HEADER.getBytes(StandardCharsets.UTF_8);
