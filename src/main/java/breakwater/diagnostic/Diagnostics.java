@@ -1,6 +1,7 @@
 package breakwater.diagnostic;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 
 /** Collects the problems of one file so that all of them are reported together. */
@@ -27,6 +28,18 @@ public final class Diagnostics {
     public void throwIfAny() throws InputException {
         if (!found.isEmpty()) {
             throw new InputException(found);
+        }
+    }
+
+    /**
+     * Like {@link #throwIfAny()}, with the problems ordered by line, then column (stable: problems at the
+     * same place keep the order they were found in), the way a compiler lists them.
+     */
+    public void throwIfAnyInFileOrder() throws InputException {
+        if (!found.isEmpty()) {
+            List<Diagnostic> ordered = new ArrayList<>(found);
+            ordered.sort(Comparator.comparingInt(Diagnostic::line).thenComparingInt(Diagnostic::column));
+            throw new InputException(ordered);
         }
     }
 }

@@ -38,7 +38,7 @@ public final class EngineeringNotation {
      */
     public static double parse(String text, Quantity quantity) throws NotationException {
         if (text == null || text.isBlank()) {
-            throw new NotationException("empty value where a " + quantity.description() + " is expected");
+            throw new NotationException("empty value where " + withArticle(quantity) + " is expected");
         }
         String s = text.strip();
         double value = parseInner(s, quantity);
@@ -59,8 +59,9 @@ public final class EngineeringNotation {
         while (i < n && (Character.isDigit(s.charAt(i)) || s.charAt(i) == '.')) {
             i++;
         }
-        // IEC 60062: digits, a prefix letter or R, digits (4u7, 2m2, R47, 4R7, 1k5)
-        if (i < n && i + 1 < n + 1) {
+        // IEC 60062: digits, a prefix letter or R in place of the decimal point, digits
+        // (4u7, 2m2, R47, 4R7, 1k5, n47); the whole part may be absent, the fraction may not
+        if (i < n) {
             char c = s.charAt(i);
             boolean iecLetter = PREFIXES.containsKey(c) || c == 'R';
             if (iecLetter && s.substring(digitsStart, i).indexOf('.') < 0) {
@@ -70,7 +71,7 @@ public final class EngineeringNotation {
                 }
                 boolean hasFraction = j > i + 1;
                 boolean hasWhole = i > digitsStart;
-                if (hasFraction && (hasWhole || c == 'R')) {
+                if (hasFraction) {
                     String whole = hasWhole ? s.substring(digitsStart, i) : "0";
                     String frac = s.substring(i + 1, j);
                     double mantissa = Double.parseDouble(whole + "." + frac);
@@ -78,6 +79,9 @@ public final class EngineeringNotation {
                     if (c == 'R' && quantity != Quantity.RESISTANCE) {
                         throw new NotationException("'" + s + "': the R form of IEC 60062 is for resistance, not "
                                 + quantity.description());
+                    }
+                    if (quantity == Quantity.FRACTION) {
+                        throw new NotationException("'" + s + "': a fraction takes no SI prefix; write e.g. 3 % or 0.03");
                     }
                     String unit = s.substring(j).strip();
                     checkUnit(s, unit, quantity);
@@ -115,7 +119,8 @@ public final class EngineeringNotation {
         }
         if (rest.equals("%")) {
             if (quantity != Quantity.FRACTION) {
-                throw new NotationException("'" + s + "': a percentage is not a " + quantity.description());
+                throw new NotationException("'" + s + "': a percentage is not " + withArticle(quantity)
+                        + ", only fractions such as a tolerance take %");
             }
             return mantissa / 100.0;
         }
@@ -143,14 +148,25 @@ public final class EngineeringNotation {
         }
         for (Quantity other : Quantity.values()) {
             if (other != quantity && other.acceptedSymbols().contains(unit)) {
-                throw new NotationException("'" + whole + "' is a " + other.description() + " (" + unit
-                        + "), but a " + quantity.description() + " is expected"
+                throw new NotationException("'" + whole + "' is " + withArticle(other) + " (" + unit
+                        + "), but " + withArticle(quantity) + " is expected"
                         + (quantity.symbol().isEmpty() ? "" : " (" + quantity.symbol() + ")"));
             }
         }
+        if (unit.startsWith(",")) {
+            throw new NotationException("'" + whole + "': a comma is not a decimal separator, numbers use a point"
+                    + " (write " + whole.replace(',', '.') + ")");
+        }
         throw new NotationException("'" + whole + "': unknown unit or prefix '" + unit + "'"
-                + (quantity.symbol().isEmpty() ? "" : "; a " + quantity.description() + " takes "
-                + String.join(", ", quantity.acceptedSymbols()) + " with an SI prefix f p n u µ m k M G"));
+                + (quantity.symbol().isEmpty()
+                ? "; " + withArticle(quantity) + " takes no unit, only an SI prefix f p n u µ m k M G"
+                : "; " + withArticle(quantity) + " takes " + String.join(", ", quantity.acceptedSymbols())
+                + " with an optional SI prefix f p n u µ m k M G"));
+    }
+
+    private static String withArticle(Quantity quantity) {
+        String d = quantity.description();
+        return ("aeiou".indexOf(d.charAt(0)) >= 0 ? "an " : "a ") + d;
     }
 
     /** Formats with 3 significant digits and an SI prefix: {@code 4.7e-6, CAPACITANCE} gives "4.7 µF". */
@@ -161,16 +177,29 @@ public final class EngineeringNotation {
     /**
      * Formats {@code value} with {@code digits} significant digits, an SI prefix chosen so the mantissa
      * lies in [1, 1000), trailing zeros removed, and the quantity's symbol. Fractions print as percent.
+     *
+     * <p>One exception: inductances from 0.1 nH up to 1 nH print in nH ({@code 0.45 nH}, not
+     * {@code 450 pH}), the way part ESL and mounting inductance are usually quoted (common practice).
      */
     public static String format(double value, Quantity quantity, int digits) {
+        if (digits < 1) {
+            throw new IllegalArgumentException("digits must be >= 1, got " + digits);
+        }
         if (quantity == Quantity.FRACTION) {
-            return trim(String.format(Locale.ROOT, "%." + Math.max(0, digits - 1) + "g", value * 100.0)) + " %";
+            if (!Double.isFinite(value)) {
+                return value + " %";
+            }
+            double percent = value * 100.0;
+            return (percent == 0.0 ? "0" : roundSignificant(percent, digits)) + " %";
         }
         if (value == 0.0 || !Double.isFinite(value)) {
             return (value == 0.0 ? "0" : String.valueOf(value)) + (quantity.symbol().isEmpty() ? "" : " " + quantity.symbol());
         }
         double abs = Math.abs(value);
         int exp3 = (int) Math.floor(Math.log10(abs) / 3.0);
+        if (quantity == Quantity.INDUCTANCE && exp3 == -4 && abs >= 1e-10 * (1 - 1e-12)) {
+            exp3 = -3;
+        }
         // rounding can push the mantissa to 1000 (999.96 -> 1000): recompute after rounding
         double mantissa = value / Math.pow(10, 3 * exp3);
         String text = roundSignificant(mantissa, digits);
@@ -190,7 +219,8 @@ public final class EngineeringNotation {
 
     private static String roundSignificant(double mantissa, int digits) {
         double abs = Math.abs(mantissa);
-        int intDigits = abs < 1 ? 1 : (int) Math.floor(Math.log10(abs)) + 1;
+        // digits before the point; 0 for mantissas in [0.1, 1), so 0.456 keeps three significant digits
+        int intDigits = abs == 0 ? 1 : (int) Math.floor(Math.log10(abs)) + 1;
         int decimals = Math.max(0, digits - intDigits);
         return trim(String.format(Locale.ROOT, "%." + decimals + "f", mantissa));
     }
@@ -205,6 +235,6 @@ public final class EngineeringNotation {
                 s = s.substring(0, s.length() - 1);
             }
         }
-        return s.equals("-0") ? "0" : s;
+        return s.equals("-0") || s.matches("-0\\.?0*") ? "0" : s;
     }
 }

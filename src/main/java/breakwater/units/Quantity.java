@@ -11,7 +11,7 @@ import java.util.List;
 public enum Quantity {
     CAPACITANCE("capacitance", "F", List.of("F")),
     INDUCTANCE("inductance", "H", List.of("H")),
-    RESISTANCE("resistance", "Ω", List.of("Ohm", "ohm", "Ohms", "ohms", "Ω", "R")),
+    RESISTANCE("resistance", "Ω", List.of("Ohm", "ohm", "Ohms", "ohms", "Ω", "\u2126", "R")),
     VOLTAGE("voltage", "V", List.of("V")),
     CURRENT("current", "A", List.of("A")),
     FREQUENCY("frequency", "Hz", List.of("Hz", "hz", "HZ")),
