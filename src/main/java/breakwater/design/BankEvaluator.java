@@ -6,8 +6,14 @@ import breakwater.network.ImpedanceCurve;
 import breakwater.network.ImpedanceMetrics;
 import breakwater.network.NetworkBuilder;
 import breakwater.network.PowerNetwork;
+import breakwater.diagnostic.Diagnostic;
+import breakwater.diagnostic.InputException;
 import breakwater.scenario.Footprint;
 import breakwater.scenario.Scenario;
+import breakwater.timedomain.PoleResidueModel;
+import breakwater.timedomain.UnboundedWorstCaseException;
+import breakwater.timedomain.WorstCase;
+import breakwater.timedomain.WorstCaseAnalyzer;
 
 import java.util.Objects;
 import java.util.Optional;
@@ -20,10 +26,24 @@ public final class BankEvaluator {
     private final Optional<Footprint> footprint;
     private final FrequencyGrid reportGrid;
 
-    public BankEvaluator(Scenario scenario, Optional<Footprint> footprint) {
+    /**
+     * @throws InputException when the worst case would be unbounded: ideal load edges (no edge time) and
+     *                        no capacitance directly at the load node, so Z(∞) is infinite
+     */
+    public BankEvaluator(Scenario scenario, Optional<Footprint> footprint) throws InputException {
         this.scenario = Objects.requireNonNull(scenario);
         this.footprint = Objects.requireNonNull(footprint);
         this.reportGrid = FrequencyGrid.aroundBand(scenario.band(), FrequencyGrid.DEFAULT_POINTS_PER_DECADE);
+        PowerNetwork fixed = NetworkBuilder.build(scenario, java.util.List.of(), footprint);
+        if (!scenario.rail().hasEdgeTime() && !fixed.hasFiniteHighFrequencyLimit()) {
+            throw new InputException(Diagnostic.of(scenario.source(),
+                    "with ideal load edges (no rail.edge_time) the worst case is unbounded here: the load node has "
+                            + "no capacitance without series inductance, so the load sees an inductance at the "
+                            + "highest frequencies and an instant current step causes an unbounded spike")
+                    .withHint("set rail.edge_time to the fastest load swing (e.g. edge_time = \"1 ns\"), or add a "
+                            + "[die] capacitance at the load node (behind the [package]), or a [plane] when the "
+                            + "load sits at the board node."));
+        }
     }
 
     public Scenario scenario() {
@@ -42,12 +62,35 @@ public final class BankEvaluator {
         return scenario.rail().targetImpedanceOhms();
     }
 
-    /** Full evaluation of {@code bank}: impedance on the report grid, flatness, cost, board limits. */
+    /**
+     * Full evaluation of {@code bank}: impedance on the report grid, flatness, cost, board limits, and the
+     * exact worst case with the patterns that reach it.
+     */
     public Evaluation evaluate(CapacitorBank bank) {
         PowerNetwork network = NetworkBuilder.build(scenario, bank.entries(), footprint);
         ImpedanceCurve curve = ImpedanceCurve.sweep(network, reportGrid);
         ImpedanceMetrics metrics = ImpedanceAnalysis.analyze(network, curve, scenario.band(), targetImpedanceOhms());
+        PoleResidueModel model = PoleResidueModel.of(network);
+        WorstCase wc = worstCase(model);
         return new Evaluation(bank, network, curve, metrics, CostBreakdown.of(bank, scenario.cost()),
-                BoardCheck.violations(bank, scenario.board()));
+                BoardCheck.violations(bank, scenario.board()), model, wc, figures(network, wc));
+    }
+
+    /** The exact worst case of {@code network} in volts: the one computation solver and reports share. */
+    public WorstCaseFigures worstCaseFigures(PowerNetwork network) {
+        return figures(network, worstCase(PoleResidueModel.of(network)));
+    }
+
+    private WorstCaseFigures figures(PowerNetwork network, WorstCase wc) {
+        return WorstCaseFigures.of(scenario.rail(), network.dcResistanceOhms(), wc.droopOhms(), wc.overshootOhms());
+    }
+
+    private WorstCase worstCase(PoleResidueModel model) {
+        try {
+            return WorstCaseAnalyzer.analyze(model, scenario.rail().edgeTimeS());
+        } catch (UnboundedWorstCaseException e) {
+            // excluded by the constructor's check; reaching here is a bug
+            throw new IllegalStateException("unbounded worst case after the constructor's check", e);
+        }
     }
 }

@@ -3,6 +3,8 @@ package breakwater.design;
 import breakwater.network.ImpedanceCurve;
 import breakwater.network.ImpedanceMetrics;
 import breakwater.network.PowerNetwork;
+import breakwater.timedomain.PoleResidueModel;
+import breakwater.timedomain.WorstCase;
 
 import java.util.List;
 
@@ -16,6 +18,9 @@ import java.util.List;
  * @param impedance   flatness and anti-resonances in the band
  * @param cost        cost per board
  * @param board       board limits broken (empty when the bank fits)
+ * @param model       pole–residue form of Z at the load node
+ * @param worstCase   exact worst case per ampere of ΔI, with the patterns that reach it
+ * @param figures     the worst case in volts against the tolerance band
  */
 public record Evaluation(
         CapacitorBank bank,
@@ -23,7 +28,10 @@ public record Evaluation(
         ImpedanceCurve curve,
         ImpedanceMetrics impedance,
         CostBreakdown cost,
-        List<BoardCheck.Violation> board) {
+        List<BoardCheck.Violation> board,
+        PoleResidueModel model,
+        WorstCase worstCase,
+        WorstCaseFigures figures) {
 
     public Evaluation {
         board = List.copyOf(board);

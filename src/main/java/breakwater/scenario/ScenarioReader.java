@@ -43,7 +43,7 @@ import java.util.regex.Pattern;
  * [cost]       placement, line_item, currency
  * [solver]     time_limit ("30 s", "2 min", "500 ms"; a number is seconds), seed
  * [objective]  require_target
- * [existing]   bank (relative to the scenario's folder; must exist)
+ * [existing]   file (relative to the scenario's folder; must exist)
  * </pre>
  * Physical values are TOML numbers in plain SI units or strings in engineering notation
  * ({@code "0.3 mOhm"}, {@code "4u7"}); fractions are ratios ({@code 0.03}) or percentages
@@ -73,7 +73,7 @@ public final class ScenarioReader {
         SECTIONS.put("cost", List.of("placement", "line_item", "currency"));
         SECTIONS.put("solver", List.of("time_limit", "seed"));
         SECTIONS.put("objective", List.of("require_target"));
-        SECTIONS.put("existing", List.of("bank"));
+        SECTIONS.put("existing", List.of("file"));
     }
 
     /** Default share of the maximum current that steps when neither step nor current_step is given. */
@@ -99,7 +99,7 @@ public final class ScenarioReader {
     /**
      * Reads a scenario from its text.
      *
-     * @param scenarioDir folder that relative paths ({@code catalog.file}, {@code existing.bank}) start from
+     * @param scenarioDir folder that relative paths ({@code catalog.file}, {@code existing.file}) start from
      */
     public static Scenario parse(String tomlText, Path scenarioDir, String displayName) throws InputException {
         String text = !tomlText.isEmpty() && tomlText.charAt(0) == '\uFEFF' ? tomlText.substring(1) : tomlText;
@@ -485,10 +485,10 @@ public final class ScenarioReader {
         }
 
         private String existing() {
-            if (!has("existing", "bank")) {
+            if (!has("existing", "file")) {
                 return "";
             }
-            return existingFile("existing", "bank", "bank file").map(Path::toString).orElse("");
+            return existingFile("existing", "file", "bank file").map(Path::toString).orElse("");
         }
 
         // ---- values ----

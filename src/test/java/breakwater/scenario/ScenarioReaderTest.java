@@ -193,7 +193,7 @@ class ScenarioReaderTest {
     void objectiveAndExistingBank() throws Exception {
         Files.writeString(dir.resolve("old-bank.csv"), "part,count\n");
 
-        Scenario s = parse(BASE + "[objective]\nrequire_target = true\n[existing]\nbank = \"old-bank.csv\"\n");
+        Scenario s = parse(BASE + "[objective]\nrequire_target = true\n[existing]\nfile = \"old-bank.csv\"\n");
 
         assertThat(s.requireTarget()).isTrue();
         assertThat(s.existingBankFile()).isEqualTo(dir.resolve("old-bank.csv").toString());

@@ -1,0 +1,45 @@
+package breakwater.cli;
+
+import breakwater.optimize.SearchSettings;
+import breakwater.scenario.Scenario;
+import picocli.CommandLine.Option;
+
+import java.time.Duration;
+
+/** Search options shared by the commands that run the solver. */
+final class SearchOptions {
+    @Option(names = "--seed", paramLabel = "N",
+            description = "Seed of the first solver (solver k uses N+k). Default: [solver] seed, else 1.")
+    Long seed;
+
+    @Option(names = "--time-limit", paramLabel = "DURATION", converter = Durations.Converter.class,
+            description = "Search time, e.g. 30s, 2min, 500ms. Default: [solver] time_limit, else 30 s.")
+    Duration timeLimit;
+
+    @Option(names = "--moves", paramLabel = "N",
+            description = "Stop each solver after N evaluated moves; with --seed the result is reproducible.")
+    long moves;
+
+    @Option(names = "--solvers", paramLabel = "N",
+            description = "Independent solvers run in parallel (default: one per core, at most 4).")
+    Integer solvers;
+
+    SearchSettings settings(Scenario scenario) {
+        Duration limit = timeLimit != null ? timeLimit : scenario.solver().timeLimit();
+        long s = seed != null ? seed : scenario.solver().seed();
+        SearchSettings settings = SearchSettings.defaults(limit, s);
+        if (moves < 0) {
+            throw new UsageException("--moves must be >= 0");
+        }
+        if (moves > 0) {
+            settings = settings.withMoveLimit(moves);
+        }
+        if (solvers != null) {
+            if (solvers < 1) {
+                throw new UsageException("--solvers must be >= 1");
+            }
+            settings = settings.withSolvers(solvers);
+        }
+        return settings;
+    }
+}
