@@ -5,17 +5,24 @@ import breakwater.report.ReportModel.ImpedancePlot;
 import breakwater.report.ReportModel.ImpedanceSeries;
 import breakwater.report.ReportModel.WaveformPlot;
 import breakwater.report.ReportModel.WaveformSeries;
+
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.LegendItem;
 import org.jfree.chart.LegendItemCollection;
 import org.jfree.chart.annotations.XYTextAnnotation;
+import org.jfree.chart.axis.AxisState;
 import org.jfree.chart.axis.LogAxis;
+import org.jfree.chart.axis.LogTick;
 import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.axis.NumberTick;
 import org.jfree.chart.axis.NumberTickUnit;
+import org.jfree.chart.axis.Tick;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
+import org.jfree.chart.plot.DatasetRenderingOrder;
 import org.jfree.chart.plot.IntervalMarker;
+import org.jfree.chart.plot.Plot;
 import org.jfree.chart.plot.PlotOrientation;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
@@ -23,6 +30,7 @@ import org.jfree.chart.renderer.xy.StandardXYBarPainter;
 import org.jfree.chart.renderer.xy.XYBarRenderer;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.renderer.xy.XYStepRenderer;
+import org.jfree.chart.text.TextUtils;
 import org.jfree.chart.title.LegendTitle;
 import org.jfree.chart.ui.Layer;
 import org.jfree.chart.ui.RectangleAnchor;
@@ -38,16 +46,23 @@ import org.jfree.svg.ViewBox;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
+import java.awt.Graphics2D;
+import java.awt.GraphicsEnvironment;
 import java.awt.Paint;
 import java.awt.Shape;
 import java.awt.Stroke;
+import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
 import java.awt.geom.Rectangle2D;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.text.CharacterIterator;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Locale;
 
 /**
  * The report's charts, drawn by JFreeChart into JFreeSVG and returned as one {@code <svg>} element each
@@ -63,7 +78,7 @@ public final class Charts {
             System.setProperty("java.awt.headless", "true");
         }
         // draw rotated labels as rotated text, not as glyph outlines: the SVG stays searchable and small
-        org.jfree.chart.text.TextUtils.setUseDrawRotatedStringWorkaround(false);
+        TextUtils.setUseDrawRotatedStringWorkaround(false);
     }
 
     /** Okabe–Ito colours: distinguishable with the common forms of colour blindness, and in grey print. */
@@ -103,8 +118,8 @@ public final class Charts {
     private static String chooseFamily() {
         List<String> installed;
         try {
-            installed = Arrays.asList(java.awt.GraphicsEnvironment.getLocalGraphicsEnvironment()
-                    .getAvailableFontFamilyNames(java.util.Locale.ROOT));
+            installed = Arrays.asList(GraphicsEnvironment.getLocalGraphicsEnvironment()
+                    .getAvailableFontFamilyNames(Locale.ROOT));
         } catch (RuntimeException | Error e) { // no font configuration at all: fall back to the logical font
             return Font.SANS_SERIF;
         }
@@ -400,7 +415,7 @@ public final class Charts {
         XYLineAndShapeRenderer dot = new XYLineAndShapeRenderer(false, true);
         XYSeries worstPoint = new XYSeries("worst", false, true);
         worstPoint.add(t[worst], v[worst]);
-        dot.setSeriesShape(0, new java.awt.geom.Ellipse2D.Double(-4, -4, 8, 8));
+        dot.setSeriesShape(0, new Ellipse2D.Double(-4, -4, 8, 8));
         dot.setSeriesPaint(0, MARK);
         bottom.setDataset(1, new XYSeriesCollection(worstPoint));
         bottom.setRenderer(1, dot);
@@ -417,7 +432,7 @@ public final class Charts {
         legend.add(lineItem("limits " + fourDigits(plot.lowerLimitV(), "V") + " / "
                 + fourDigits(plot.upperLimitV(), "V"), LIMIT, DASHED));
         legend.add(lineItem("nominal " + fourDigits(plot.nominalV(), "V"), NOMINAL, THIN));
-        legend.add(new LegendItem(what, null, null, null, new java.awt.geom.Ellipse2D.Double(-4, -4, 8, 8), MARK));
+        legend.add(new LegendItem(what, null, null, null, new Ellipse2D.Double(-4, -4, 8, 8), MARK));
         combined.setFixedLegendItems(legend);
         return toSvg(chart(combined, true), width, height, "bww", plot.hashCode());
     }
@@ -511,18 +526,18 @@ public final class Charts {
         NumberAxis y = linearAxis(f.excursionLabel(), f.excursionUnit(), yLo - yPad, yHi + yPad);
 
         XYLineAndShapeRenderer dots = new XYLineAndShapeRenderer(false, true);
-        dots.setSeriesShape(0, new java.awt.geom.Ellipse2D.Double(-2.5, -2.5, 5, 5));
+        dots.setSeriesShape(0, new Ellipse2D.Double(-2.5, -2.5, 5, 5));
         dots.setSeriesPaint(0, new Color(0x999999));
         XYStepRenderer steps = new XYStepRenderer();
         steps.setSeriesPaint(0, PALETTE[0]);
         steps.setSeriesStroke(0, LINE);
         steps.setDefaultShapesVisible(true);
-        steps.setSeriesShape(0, new java.awt.geom.Ellipse2D.Double(-3.5, -3.5, 7, 7));
+        steps.setSeriesShape(0, new Ellipse2D.Double(-3.5, -3.5, 7, 7));
         // drawn in index order: candidates below, the frontier over them, highlights on top
         XYPlot plot = new XYPlot(new XYSeriesCollection(all), x, y, dots);
         plot.setDataset(1, new XYSeriesCollection(front));
         plot.setRenderer(1, steps);
-        plot.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.FORWARD);
+        plot.setDatasetRenderingOrder(DatasetRenderingOrder.FORWARD);
         style(plot);
         for (Limit l : f.excursionLimits()) {
             plot.addRangeMarker(valueLine(l.value(), l.label(), LIMIT, DASHED, false), Layer.FOREGROUND);
@@ -539,7 +554,7 @@ public final class Charts {
             XYSeries hs = new XYSeries("highlighted", false, true);
             f.highlighted().forEach(p -> hs.add(p.x(), p.y()));
             XYLineAndShapeRenderer ring = new XYLineAndShapeRenderer(false, true);
-            ring.setSeriesShape(0, new java.awt.geom.Ellipse2D.Double(-7, -7, 14, 14));
+            ring.setSeriesShape(0, new Ellipse2D.Double(-7, -7, 14, 14));
             ring.setSeriesShapesFilled(0, false);
             ring.setUseOutlinePaint(false);
             ring.setSeriesPaint(0, PALETTE[1]);
@@ -550,7 +565,7 @@ public final class Charts {
             plot.setRenderer(2, ring);
         }
         LegendItemCollection legend = new LegendItemCollection();
-        legend.add(new LegendItem("candidate", null, null, null, new java.awt.geom.Ellipse2D.Double(-3, -3, 6, 6),
+        legend.add(new LegendItem("candidate", null, null, null, new Ellipse2D.Double(-3, -3, 6, 6),
                 new Color(0x999999)));
         legend.add(lineItem("frontier (no cheaper bank with a lower " + f.excursionLabel() + ")", PALETTE[0], LINE));
         if (!f.excursionLimits().isEmpty()) {
@@ -584,7 +599,7 @@ public final class Charts {
     // ------------------------------------------------------------------------------------------------
     // Shared pieces
 
-    private static JFreeChart chart(org.jfree.chart.plot.Plot plot, boolean legend) {
+    private static JFreeChart chart(Plot plot, boolean legend) {
         JFreeChart c = new JFreeChart(null, LABEL_FONT, plot, legend);
         c.setBackgroundPaint(Color.WHITE);
         c.setPadding(new RectangleInsets(6, 4, 4, 12));
@@ -663,24 +678,24 @@ public final class Charts {
 
         @Override
         @SuppressWarnings({"rawtypes", "unchecked"})
-        public List refreshTicks(java.awt.Graphics2D g2, org.jfree.chart.axis.AxisState state, Rectangle2D dataArea,
+        public List refreshTicks(Graphics2D g2, AxisState state, Rectangle2D dataArea,
                                  RectangleEdge edge) {
-            List<org.jfree.chart.axis.Tick> out = new ArrayList<>();
+            List<Tick> out = new ArrayList<>();
             for (Object o : super.refreshTicks(g2, state, dataArea, edge)) {
-                if (o instanceof org.jfree.chart.axis.LogTick t) {
+                if (o instanceof LogTick t) {
                     String text = "";
                     if (t.getAttributedLabel() != null) {
                         StringBuilder b = new StringBuilder();
                         var it = t.getAttributedLabel().getIterator();
-                        for (char c = it.first(); c != java.text.CharacterIterator.DONE; c = it.next()) {
+                        for (char c = it.first(); c != CharacterIterator.DONE; c = it.next()) {
                             b.append(c);
                         }
                         text = b.toString();
                     }
-                    out.add(new org.jfree.chart.axis.NumberTick(t.getTickType(), t.getValue(), text, t.getTextAnchor(),
+                    out.add(new NumberTick(t.getTickType(), t.getValue(), text, t.getTextAnchor(),
                             t.getRotationAnchor(), t.getAngle()));
                 } else {
-                    out.add((org.jfree.chart.axis.Tick) o);
+                    out.add((Tick) o);
                 }
             }
             return out;
@@ -765,7 +780,7 @@ public final class Charts {
 
     /** Voltages with four significant digits and no prefix change across 1 V: "0.9215 V". */
     private static String fourDigits(double v, String unit) {
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(4)).stripTrailingZeros().toPlainString()
+        return new BigDecimal(v).round(new MathContext(4)).stripTrailingZeros().toPlainString()
                 + " " + unit;
     }
 
