@@ -1,0 +1,32 @@
+package breakwater.timedomain;
+
+/**
+ * The exact worst-case transient per ampere of load step ΔI (multiply by ΔI for volts).
+ *
+ * @param droopOhms        largest sag below the I_min operating point, per ampere of ΔI, &ge; 0
+ * @param overshootOhms    largest rise above it, per ampere of ΔI, &ge; 0
+ * @param droopPattern     a load pattern that reaches the droop
+ * @param overshootPattern a load pattern that reaches the overshoot
+ * @param edgeTimeS        the load's edge time t_e used (0 = ideal edges): |du/dt| &le; 1/t_e
+ */
+public record WorstCase(double droopOhms, double overshootOhms, LoadPattern droopPattern,
+                        LoadPattern overshootPattern, double edgeTimeS) {
+
+    public WorstCase {
+        if (!(droopOhms >= 0) || !Double.isFinite(droopOhms) || !(overshootOhms >= 0)
+                || !Double.isFinite(overshootOhms)) {
+            throw new IllegalArgumentException("worst-case droop and overshoot must be finite and >= 0, got "
+                    + droopOhms + ", " + overshootOhms);
+        }
+        if (!(edgeTimeS >= 0) || !Double.isFinite(edgeTimeS)) {
+            throw new IllegalArgumentException("edge time must be finite and >= 0, got " + edgeTimeS);
+        }
+        java.util.Objects.requireNonNull(droopPattern, "droopPattern");
+        java.util.Objects.requireNonNull(overshootPattern, "overshootPattern");
+    }
+
+    /** Bound on the peak-to-peak excursion per ampere: droop + overshoot. */
+    public double peakToPeakOhms() {
+        return droopOhms + overshootOhms;
+    }
+}
