@@ -47,30 +47,7 @@ final class CheckCommand implements Callable<Integer> {
         List<BankEntry> entries = BankFileReader.read(bankFile, Inputs.display(bankFile), in.catalog());
         BankEvaluator evaluator = new BankEvaluator(in.scenario(), in.footprint());
         Evaluation e = evaluator.evaluate(new CapacitorBank(entries));
-        ObjectNode summary = SummaryJson.of("check", in.scenario(), output.footprint, e);
-        boolean meets = Verdicts.meetsSpec(in.scenario(), e);
-        summary.put("meets_spec", meets);
-
-        PrintWriter out = spec.commandLine().getOut();
-        if (output.json) {
-            StringWriter sw = new StringWriter();
-            SummaryJson.write(summary, sw);
-            out.print(sw);
-        } else if (!output.quiet) {
-            out.print(ConsoleReport.render(in.scenario(), output.footprint, e));
-            out.println();
-            out.println(Verdicts.describe(in.scenario(), e));
-        }
-        if (output.outDir().isPresent()) {
-            OutputDirectory dir = new OutputDirectory(output.outDir().get());
-            dir.write("bom.csv", w -> CsvOutputs.writeBom(e, in.scenario().cost().currency(), w));
-            dir.write("impedance.csv", w -> CsvOutputs.writeImpedance(e.curve(), evaluator.targetImpedanceOhms(), w));
-            dir.write("summary.json", w -> SummaryJson.write(summary, w));
-            if (!output.quiet && !output.json) {
-                out.println("Wrote bom.csv, impedance.csv, summary.json to " + Inputs.display(dir.path()));
-            }
-        }
-        out.flush();
-        return meets ? ExitCodes.OK : ExitCodes.SPEC_NOT_MET;
+        return Results.emit("check", in, evaluator, e, java.util.Optional.empty(), output,
+                spec.commandLine().getOut(), spec.commandLine().getErr());
     }
 }

@@ -72,9 +72,12 @@ final class SolveCommand implements Callable<Integer> {
                     settings.moveLimit() > 0 ? ", move limit " + settings.moveLimit() : "");
             err.flush();
         }
-        SearchResult result = Searches.runWithProgress(bankSearch, settings, CapacitorBank.EMPTY, err, output.quiet,
-                in.scenario());
-        Evaluation e = evaluator.evaluate(result.bank());
-        return Results.emit("solve", in, evaluator, e, result, output, spec.commandLine().getOut(), err);
+        try (StopOnInterrupt guard = new StopOnInterrupt(bankSearch)) {
+            SearchResult result = Searches.runWithProgress(bankSearch, settings, CapacitorBank.EMPTY, err, output.quiet,
+                    in.scenario());
+            Evaluation e = evaluator.evaluate(result.bank());
+            return Results.emit("solve", in, evaluator, e, java.util.Optional.of(result), output,
+                    spec.commandLine().getOut(), err);
+        }
     }
 }

@@ -4,7 +4,16 @@ import breakwater.design.BoardCheck;
 import breakwater.design.Evaluation;
 import breakwater.scenario.Scenario;
 
+import breakwater.network.AntiResonance;
+
+import java.util.Comparator;
 import java.util.Locale;
+import java.util.Optional;
+
+import static breakwater.units.EngineeringNotation.format;
+import static breakwater.units.Quantity.FREQUENCY;
+import static breakwater.units.Quantity.RESISTANCE;
+import static breakwater.units.Quantity.VOLTAGE;
 
 /** Whether a bank meets the scenario's spec, and why not, in words. */
 final class Verdicts {
@@ -12,7 +21,14 @@ final class Verdicts {
     }
 
     static boolean meetsSpec(Scenario s, Evaluation e) {
-        return e.fitsBoard() && (!s.requireTarget() || e.impedance().underTarget());
+        return e.figures().passes() && e.fitsBoard() && (!s.requireTarget() || e.impedance().underTarget());
+    }
+
+    /** The anti-resonance with the highest |Z|, in words, e.g. "12.3 mΩ at 49.4 MHz, Q 1.1". */
+    static Optional<String> worstResonance(Evaluation e) {
+        return e.impedance().antiResonances().stream().max(Comparator.comparingDouble(AntiResonance::impedanceOhms))
+                .map(a -> format(a.impedanceOhms(), RESISTANCE) + " at " + format(a.frequencyHz(), FREQUENCY, 4)
+                        + String.format(Locale.ROOT, ", %.2f × target, Q %.1f", a.impedanceOhms() / e.impedance().targetOhms(), a.q()));
     }
 
     static String describe(Scenario s, Evaluation e) {
@@ -21,6 +37,16 @@ final class Verdicts {
             b.append("MEETS SPEC");
         } else {
             b.append("DOES NOT MEET SPEC:");
+            var wc = e.figures();
+            if (wc.droopExcessV() > 0) {
+                b.append("\n  worst-case droop falls ").append(format(wc.droopExcessV(), VOLTAGE))
+                        .append(" below the lower limit");
+                worstResonance(e).ifPresent(a -> b.append(" (largest anti-resonance: ").append(a).append(')'));
+            }
+            if (wc.overshootExcessV() > 0) {
+                b.append("\n  worst-case overshoot rises ").append(format(wc.overshootExcessV(), VOLTAGE))
+                        .append(" above the upper limit");
+            }
             for (BoardCheck.Violation v : e.board()) {
                 b.append("\n  board limit ").append(v.describe());
             }

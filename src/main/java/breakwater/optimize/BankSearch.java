@@ -6,9 +6,12 @@ import ai.timefold.solver.core.api.solver.SolverFactory;
 import ai.timefold.solver.core.config.heuristic.selector.move.composite.UnionMoveSelectorConfig;
 import ai.timefold.solver.core.config.heuristic.selector.move.factory.MoveListFactoryConfig;
 import ai.timefold.solver.core.config.heuristic.selector.move.generic.ChangeMoveSelectorConfig;
+import ai.timefold.solver.core.config.heuristic.selector.common.SelectionCacheType;
 import ai.timefold.solver.core.config.heuristic.selector.move.generic.SwapMoveSelectorConfig;
 import ai.timefold.solver.core.config.localsearch.LocalSearchPhaseConfig;
-import ai.timefold.solver.core.config.localsearch.LocalSearchType;
+import ai.timefold.solver.core.config.phase.custom.CustomPhaseConfig;
+import ai.timefold.solver.core.config.localsearch.decider.acceptor.LocalSearchAcceptorConfig;
+import ai.timefold.solver.core.config.localsearch.decider.forager.LocalSearchForagerConfig;
 import ai.timefold.solver.core.config.score.director.ScoreDirectorFactoryConfig;
 import ai.timefold.solver.core.config.solver.EnvironmentMode;
 import ai.timefold.solver.core.config.solver.SolverConfig;
@@ -40,6 +43,8 @@ import java.util.concurrent.atomic.AtomicBoolean;
  * <p>No Timefold type appears in this class's public API.
  */
 public final class BankSearch {
+    /** Tabu search evaluates this many acceptable moves per step and takes the best of them. */
+    static final int ACCEPTED_PER_STEP = 64;
     private final JudgePool pool;
     private final List<Part> candidates;
     private final int[] maxCounts;
@@ -178,7 +183,8 @@ public final class BankSearch {
         UnionMoveSelectorConfig moves = new UnionMoveSelectorConfig().withMoveSelectors(
                 new ChangeMoveSelectorConfig(),
                 new SwapMoveSelectorConfig(),
-                new MoveListFactoryConfig().withMoveListFactoryClass(CountMoves.class));
+                new MoveListFactoryConfig().withMoveListFactoryClass(CountMoves.class)
+                        .withCacheType(SelectionCacheType.STEP));
         return new SolverConfig()
                 .withSolutionClass(BankPlan.class)
                 .withEntityClasses(PartCount.class)
@@ -188,8 +194,11 @@ public final class BankSearch {
                 .withRandomSeed(seed)
                 .withMonitoringConfig(new MonitoringConfig().withSolverMetricList(List.of()))
                 .withTerminationConfig(termination)
-                .withPhases(new LocalSearchPhaseConfig()
-                        .withLocalSearchType(LocalSearchType.LATE_ACCEPTANCE)
+                .withPhases(new CustomPhaseConfig().withCustomPhaseCommands(new GreedyFill()),
+                        new LocalSearchPhaseConfig()
+                        .withAcceptorConfig(new LocalSearchAcceptorConfig()
+                                .withEntityTabuSize(Math.max(1, Math.min(7, candidates.size() / 4))))
+                        .withForagerConfig(new LocalSearchForagerConfig().withAcceptedCountLimit(ACCEPTED_PER_STEP))
                         .withMoveSelectorConfig(moves));
     }
 

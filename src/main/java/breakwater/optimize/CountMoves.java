@@ -16,25 +16,52 @@ import java.util.SequencedCollection;
  * <ul>
  *   <li><b>nudge</b>: one part type's count up or down by 1 or 3 (the solver's change move jumps to any
  *       value in 0..max, which rarely lands next to a good bank);</li>
+ *   <li><b>drop</b>: remove one type altogether (saves its BOM line);</li>
  *   <li><b>replace by a neighbouring value</b>: move every part of one type to the next capacitance up or
- *       down in the same case, or to the same capacitance in the next case size.</li>
+ *       down in the same case, or to the same capacitance in the next case size;</li>
+ *   <li><b>transfer</b>: one part more of one type, one fewer of another — a step along the edge of the
+ *       feasible region, where the cheapest banks lie and single changes would cross into violation.</li>
  * </ul>
- * Moves read the current counts when they run, so a list built once per phase stays valid.
+ * The list is rebuilt every step from the current counts (see {@link BankSearch}), so every move changes
+ * something.
  */
 public final class CountMoves implements MoveListFactory<BankPlan> {
 
     @Override
     public List<? extends Move<BankPlan>> createMoveList(BankPlan plan) {
+        // Built afresh each step (cache type STEP) from the current counts, so that no move is a no-op:
+        // an accepted no-op would end a local-search step without changing anything.
         List<Move<BankPlan>> moves = new ArrayList<>();
         List<PartCount> all = plan.getCounts();
         for (PartCount pc : all) {
+            int now = pc.countOrZero();
             for (int delta : new int[] {1, -1, 3, -3}) {
-                moves.add(new Nudge(pc, delta));
+                int next = Math.max(0, Math.min(pc.getMaxCount(), now + delta));
+                if (next != now && (delta > 0 || Math.abs(delta) == 1 || next != 0 || now > 3)) {
+                    moves.add(new SetCounts(List.of(pc), new int[] {next}, "nudge"));
+                }
+            }
+            if (now > 1) {
+                moves.add(new SetCounts(List.of(pc), new int[] {0}, "drop"));
             }
         }
         for (PartCount a : all) {
+            int na = a.countOrZero();
+            if (na == 0) {
+                continue;
+            }
             for (PartCount b : neighbours(a, all)) {
-                moves.add(new Replace(a, b));
+                int nb = b.countOrZero();
+                int moved = Math.min(na, b.getMaxCount() - nb);
+                if (moved > 0) {
+                    moves.add(new SetCounts(List.of(a, b), new int[] {na - moved, nb + moved}, "replace-by-neighbour"));
+                }
+            }
+            for (PartCount b : all) {
+                int nb = b.countOrZero();
+                if (a != b && nb < b.getMaxCount()) {
+                    moves.add(new SetCounts(List.of(a, b), new int[] {na - 1, nb + 1}, "transfer"));
+                }
             }
         }
         return moves;
@@ -78,61 +105,42 @@ public final class CountMoves implements MoveListFactory<BankPlan> {
                 view.getSolutionMetaModel().genuineEntity(PartCount.class).basicVariable("count");
     }
 
-    private static int current(MutableSolutionView<BankPlan> view,
-                               PlanningVariableMetaModel<BankPlan, PartCount, Integer> var, PartCount pc) {
-        Integer v = view.getValue(var, pc);
-        return v == null ? 0 : v;
-    }
-
-    /** One type's count changed by a fixed step, clamped to its range. */
-    record Nudge(PartCount target, int delta) implements Move<BankPlan> {
+    /** Sets the counts of one or two types to values fixed when the move was built for this step. */
+    record SetCounts(List<PartCount> targets, int[] values, String kind) implements Move<BankPlan> {
         @Override
         public void execute(MutableSolutionView<BankPlan> view) {
             var var = countVariable(view);
-            int now = current(view, var, target);
-            int next = Math.max(0, Math.min(target.getMaxCount(), now + delta));
-            if (next != now) {
-                view.changeVariable(var, target, next);
+            for (int i = 0; i < targets.size(); i++) {
+                view.changeVariable(var, targets.get(i), values[i]);
             }
         }
 
         @Override
         public SequencedCollection<Object> getPlanningEntities() {
-            return List.of(target);
+            return List.copyOf(targets);
+        }
+
+        @Override
+        public SequencedCollection<Object> getPlanningValues() {
+            List<Object> v = new ArrayList<>();
+            for (int x : values) {
+                v.add(x);
+            }
+            return v;
         }
 
         @Override
         public String describe() {
-            return "nudge";
+            return kind;
         }
-    }
 
-    /** Every part of type {@code from} replaced by type {@code to} (as far as {@code to}'s range allows). */
-    record Replace(PartCount from, PartCount to) implements Move<BankPlan> {
         @Override
-        public void execute(MutableSolutionView<BankPlan> view) {
-            var var = countVariable(view);
-            int a = current(view, var, from);
-            if (a == 0) {
-                return;
+        public String toString() {
+            StringBuilder b = new StringBuilder(kind).append('[');
+            for (int i = 0; i < targets.size(); i++) {
+                b.append(i == 0 ? "" : ", ").append(targets.get(i).getPart().name()).append("→").append(values[i]);
             }
-            int b = current(view, var, to);
-            int moved = Math.min(a, to.getMaxCount() - b);
-            if (moved <= 0) {
-                return;
-            }
-            view.changeVariable(var, from, a - moved);
-            view.changeVariable(var, to, b + moved);
-        }
-
-        @Override
-        public SequencedCollection<Object> getPlanningEntities() {
-            return List.of(from, to);
-        }
-
-        @Override
-        public String describe() {
-            return "replace-by-neighbour";
+            return b.append(']').toString();
         }
     }
 }

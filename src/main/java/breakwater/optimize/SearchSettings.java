@@ -21,6 +21,9 @@ public record SearchSettings(Duration timeLimit, Duration unimprovedLimit, long 
         if (timeLimit.isZero() || timeLimit.isNegative()) {
             throw new IllegalArgumentException("time limit must be > 0");
         }
+        // the solver's time terminations work in whole milliseconds
+        timeLimit = Duration.ofMillis(Math.max(1, timeLimit.toMillis()));
+        unimprovedLimit = Duration.ofMillis(Math.max(1, unimprovedLimit.toMillis()));
         if (moveLimit < 0 || solvers < 1) {
             throw new IllegalArgumentException("move limit >= 0 and solvers >= 1 required");
         }

@@ -27,8 +27,8 @@ public final class ConsoleReport {
         Rail r = scenario.rail();
         String currency = scenario.cost().currency();
         line(b, "Rail", r.name().isEmpty() ? scenario.source() : r.name());
-        line(b, "", format(r.voltageV(), VOLTAGE, 4) + " ± " + format(r.toleranceFraction(), FRACTION)
-                + " (" + format(r.lowerLimitV(), VOLTAGE, 4) + " .. " + format(r.upperLimitV(), VOLTAGE, 4) + "), load "
+        line(b, "", volts(r.voltageV()) + " ± " + format(r.toleranceFraction(), FRACTION)
+                + " (" + volts(r.lowerLimitV()) + " .. " + volts(r.upperLimitV()) + "), load "
                 + format(r.minCurrentA(), CURRENT) + " .. " + format(r.maxCurrentA(), CURRENT) + " (ΔI "
                 + format(r.currentStepA(), CURRENT) + "), "
                 + (r.hasEdgeTime() ? "edge time " + format(r.edgeTimeS(), TIME) : "ideal edges"));
@@ -55,6 +55,17 @@ public final class ConsoleReport {
             line(b, "Board", "LIMIT BROKEN: " + v.describe());
         }
         b.append('\n');
+        var wc = e.figures();
+        line(b, "Worst case", "droop " + format(wc.droopV(), VOLTAGE) + ", overshoot " + format(wc.overshootV(), VOLTAGE)
+                + " from the " + volts(wc.operatingV()) + " operating point at I_min"
+                + (r.hasEdgeTime() ? " (any load slewing no faster than ΔI in " + format(r.edgeTimeS(), TIME) + ")"
+                : " (any load pattern, ideal edges)"));
+        line(b, "", "V_min " + volts(wc.minVoltageV()) + " (limit " + volts(wc.lowerLimitV()) + "), V_max "
+                + volts(wc.maxVoltageV()) + " (limit " + volts(wc.upperLimitV()) + "), margin "
+                + format(wc.marginV(), VOLTAGE) + (wc.passes() ? "  PASS" : "  FAIL"));
+        line(b, "", String.format(Locale.ROOT, "rogue factor %.2f: the worst excursion is %.2f × ΔI·Z_t (%s)",
+                wc.rogueFactor(), wc.rogueFactor(), format(r.currentStepA() * r.targetImpedanceOhms(), VOLTAGE)));
+        b.append('\n');
         var m = e.impedance();
         line(b, "Impedance", "peak " + format(m.peakOhms(), RESISTANCE) + " at " + format(m.peakHz(), FREQUENCY)
                 + String.format(Locale.ROOT, " (%.2f × target)", m.peakOverTarget())
@@ -70,6 +81,11 @@ public final class ConsoleReport {
             }
         }
         return b.toString();
+    }
+
+    /** Volts with 4 significant digits, always in V (engineers write 0.9 V, not 900 mV, for a rail). */
+    public static String volts(double v) {
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(4)).stripTrailingZeros().toPlainString() + " V";
     }
 
     static String money(double v) {

@@ -53,6 +53,24 @@ public final class SummaryJson {
         band.put("from_hz", scenario.band().fromHz());
         band.put("to_hz", scenario.band().toHz());
 
+        var wc = e.figures();
+        ObjectNode w = root.putObject("worst_case");
+        w.put("droop_v", wc.droopV());
+        w.put("overshoot_v", wc.overshootV());
+        w.put("peak_to_peak_v", wc.droopV() + wc.overshootV());
+        w.put("operating_v", wc.operatingV());
+        w.put("min_voltage_v", wc.minVoltageV());
+        w.put("max_voltage_v", wc.maxVoltageV());
+        w.put("lower_limit_v", wc.lowerLimitV());
+        w.put("upper_limit_v", wc.upperLimitV());
+        w.put("margin_v", wc.marginV());
+        w.put("passes", wc.passes());
+        w.put("rogue_factor", wc.rogueFactor());
+        w.put("edge_time_s", r.edgeTimeS());
+        w.put("droop_ohm", e.worstCase().droopOhms());
+        w.put("overshoot_ohm", e.worstCase().overshootOhms());
+        root.put("rogue_factor", wc.rogueFactor());
+
         var m = e.impedance();
         ObjectNode imp = root.putObject("impedance");
         imp.put("peak_ohm", m.peakOhms());

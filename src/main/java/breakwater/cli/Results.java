@@ -1,0 +1,66 @@
+package breakwater.cli;
+
+import breakwater.design.BankEvaluator;
+import breakwater.design.Evaluation;
+import breakwater.optimize.SearchResult;
+import breakwater.report.ConsoleReport;
+import breakwater.report.CsvOutputs;
+import breakwater.report.OutputDirectory;
+import breakwater.report.SummaryJson;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+
+/** Writes what a run found: console text or JSON, and the files in --out. Returns the exit code. */
+final class Results {
+    private Results() {
+    }
+
+    static int emit(String mode, Inputs in, BankEvaluator evaluator, Evaluation e, Optional<SearchResult> search,
+                    OutputOptions output, PrintWriter out, PrintWriter err) throws IOException {
+        ObjectNode summary = SummaryJson.of(mode, in.scenario(), output.footprint, e);
+        boolean meets = Verdicts.meetsSpec(in.scenario(), e);
+        summary.put("meets_spec", meets);
+        search.ifPresent(r -> {
+            ObjectNode s = summary.putObject("solver");
+            s.put("seed", r.seed());
+            s.put("solvers", r.solvers());
+            s.put("time_s", r.seconds());
+            s.put("evaluations", r.evaluations());
+            s.put("stopped_early", r.stoppedEarly());
+        });
+        if (output.json) {
+            StringWriter sw = new StringWriter();
+            SummaryJson.write(summary, sw);
+            out.print(sw);
+        } else if (!output.quiet) {
+            out.print(ConsoleReport.render(in.scenario(), output.footprint, e));
+            search.ifPresent(r -> out.printf(Locale.ROOT, "%nSearch     %d banks evaluated in %.1f s by %d solver%s, seed %d%s%n",
+                    r.evaluations(), r.seconds(), r.solvers(), r.solvers() == 1 ? "" : "s", r.seed(),
+                    r.stoppedEarly() ? " (stopped by the user)" : ""));
+            out.println();
+            out.println(Verdicts.describe(in.scenario(), e));
+        }
+        if (output.outDir().isPresent()) {
+            OutputDirectory dir = new OutputDirectory(output.outDir().get());
+            List<String> written = new java.util.ArrayList<>();
+            dir.write("bom.csv", w -> CsvOutputs.writeBom(e, in.scenario().cost().currency(), w));
+            written.add("bom.csv");
+            dir.write("impedance.csv", w -> CsvOutputs.writeImpedance(e.curve(), evaluator.targetImpedanceOhms(), w));
+            written.add("impedance.csv");
+            dir.write("summary.json", w -> SummaryJson.write(summary, w));
+            written.add("summary.json");
+            if (!output.quiet && !output.json) {
+                out.println("Wrote " + String.join(", ", written) + " to " + Inputs.display(dir.path()));
+            }
+        }
+        out.flush();
+        err.flush();
+        return meets ? ExitCodes.OK : ExitCodes.SPEC_NOT_MET;
+    }
+}
