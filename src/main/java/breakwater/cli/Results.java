@@ -3,10 +3,16 @@ package breakwater.cli;
 import breakwater.design.BankEvaluator;
 import breakwater.design.Evaluation;
 import breakwater.optimize.SearchResult;
+import breakwater.report.Charts;
 import breakwater.report.ConsoleReport;
+import breakwater.report.HtmlReport;
+import breakwater.report.ReportBuilder;
+import breakwater.report.ReportModel;
 import breakwater.report.CsvOutputs;
 import breakwater.report.OutputDirectory;
 import breakwater.report.SummaryJson;
+import breakwater.report.Verdicts;
+import breakwater.timedomain.Waveform;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.io.IOException;
@@ -23,6 +29,12 @@ final class Results {
 
     static int emit(String mode, Inputs in, BankEvaluator evaluator, Evaluation e, Optional<SearchResult> search,
                     OutputOptions output, PrintWriter out, PrintWriter err) throws IOException {
+        return emit(mode, in, evaluator, e, search, List.of(), output, out, err);
+    }
+
+    static int emit(String mode, Inputs in, BankEvaluator evaluator, Evaluation e, Optional<SearchResult> search,
+                    List<ReportModel.Section> extraSections, OutputOptions output, PrintWriter out, PrintWriter err)
+            throws IOException {
         ObjectNode summary = SummaryJson.of(mode, in.scenario(), output.footprint, e);
         boolean meets = Verdicts.meetsSpec(in.scenario(), e);
         summary.put("meets_spec", meets);
@@ -53,6 +65,18 @@ final class Results {
             written.add("bom.csv");
             dir.write("impedance.csv", w -> CsvOutputs.writeImpedance(e.curve(), evaluator.targetImpedanceOhms(), w));
             written.add("impedance.csv");
+            Waveform droop = evaluator.droopWaveform(e);
+            Waveform overshoot = evaluator.overshootWaveform(e);
+            dir.write("worst-case.csv", w -> CsvOutputs.writeWorstCase(droop, w));
+            written.add("worst-case.csv");
+            ReportModel model = ReportBuilder.build(new ReportBuilder.Run(mode, in.scenario(), output.footprint, e, droop,
+                    overshoot, search, extraSections));
+            dir.write("impedance.svg", w -> w.write(Charts.impedanceChart(model.impedance())));
+            written.add("impedance.svg");
+            dir.write("worst-case.svg", w -> w.write(Charts.worstCaseChart(model.worstCase())));
+            written.add("worst-case.svg");
+            dir.write("report.html", w -> HtmlReport.write(model, w));
+            written.add("report.html");
             dir.write("summary.json", w -> SummaryJson.write(summary, w));
             written.add("summary.json");
             if (!output.quiet && !output.json) {

@@ -10,7 +10,9 @@ import breakwater.diagnostic.Diagnostic;
 import breakwater.diagnostic.InputException;
 import breakwater.scenario.Footprint;
 import breakwater.scenario.Scenario;
+import breakwater.timedomain.LoadPattern;
 import breakwater.timedomain.PoleResidueModel;
+import breakwater.timedomain.Waveform;
 import breakwater.timedomain.UnboundedWorstCaseException;
 import breakwater.timedomain.WorstCase;
 import breakwater.timedomain.WorstCaseAnalyzer;
@@ -74,6 +76,22 @@ public final class BankEvaluator {
         WorstCase wc = worstCase(model);
         return new Evaluation(bank, network, curve, metrics, CostBreakdown.of(bank, scenario.cost()),
                 BoardCheck.violations(bank, scenario.board()), model, wc, figures(network, wc));
+    }
+
+    /** The worst-case droop pattern laid out in time, with the load voltage it causes. */
+    public Waveform droopWaveform(Evaluation e) {
+        return waveform(e, e.worstCase().droopPattern());
+    }
+
+    /** The worst-case overshoot pattern laid out in time, with the load voltage it causes. */
+    public Waveform overshootWaveform(Evaluation e) {
+        return waveform(e, e.worstCase().overshootPattern());
+    }
+
+    private Waveform waveform(Evaluation e, LoadPattern pattern) {
+        var r = scenario.rail();
+        return Waveform.of(e.model(), pattern, r.currentStepA(), r.minCurrentA(), r.voltageV(),
+                e.network().dcResistanceOhms());
     }
 
     /** The exact worst case of {@code network} in volts: the one computation solver and reports share. */

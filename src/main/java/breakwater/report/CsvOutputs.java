@@ -31,6 +31,20 @@ public final class CsvOutputs {
         w.write("TOTAL," + Csv.text(split) + ",," + e.bank().totalParts() + ",," + Csv.num(e.cost().total()) + "\n");
     }
 
+    /** worst-case.csv: {@code time_s,load_current_a,voltage_v}, the droop pattern up to and after the worst instant. */
+    public static void writeWorstCase(breakwater.timedomain.Waveform wf, Writer w) throws IOException {
+        w.write("time_s,load_current_a,voltage_v\n");
+        double[] t = wf.timeS();
+        double[] i = wf.loadCurrentA();
+        double[] v = wf.voltageV();
+        StringBuilder b = new StringBuilder();
+        for (int k = 0; k < t.length; k++) {
+            b.setLength(0);
+            b.append(Csv.num(t[k])).append(',').append(Csv.num(i[k])).append(',').append(Csv.num(v[k])).append('\n');
+            w.write(b.toString());
+        }
+    }
+
     /** impedance.csv: {@code frequency_hz,impedance_ohm,phase_deg,target_ohm}. */
     public static void writeImpedance(ImpedanceCurve curve, double targetOhms, Writer w) throws IOException {
         w.write("frequency_hz,impedance_ohm,phase_deg,target_ohm\n");

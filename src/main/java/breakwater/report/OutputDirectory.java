@@ -7,6 +7,7 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
 
 /**
  * Writes result files into the user's {@code --out} folder so that a failed run never leaves half a file:
@@ -34,9 +35,11 @@ public final class OutputDirectory {
     public Path write(String name, Content content) throws IOException {
         Files.createDirectories(dir);
         Path target = dir.resolve(name);
-        Path tmp = Files.createTempFile(dir, "." + name + ".", ".tmp");
+        // a fresh name next to the target; created like any other file, so the user's umask applies
+        Path tmp = dir.resolve("." + name + "." + java.util.UUID.randomUUID() + ".tmp");
         try {
-            try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
+            try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8, StandardOpenOption.CREATE_NEW,
+                    StandardOpenOption.WRITE)) {
                 content.writeTo(w);
             }
             try {

@@ -1,4 +1,4 @@
-package breakwater.cli;
+package breakwater.report;
 
 import breakwater.design.BoardCheck;
 import breakwater.design.Evaluation;
@@ -16,22 +16,34 @@ import static breakwater.units.Quantity.RESISTANCE;
 import static breakwater.units.Quantity.VOLTAGE;
 
 /** Whether a bank meets the scenario's spec, and why not, in words. */
-final class Verdicts {
+public final class Verdicts {
     private Verdicts() {
     }
 
-    static boolean meetsSpec(Scenario s, Evaluation e) {
+    public static boolean meetsSpec(Scenario s, Evaluation e) {
         return e.figures().passes() && e.fitsBoard() && (!s.requireTarget() || e.impedance().underTarget());
     }
 
     /** The anti-resonance with the highest |Z|, in words, e.g. "12.3 mΩ at 49.4 MHz, Q 1.1". */
-    static Optional<String> worstResonance(Evaluation e) {
+    public static Optional<String> worstResonance(Evaluation e) {
         return e.impedance().antiResonances().stream().max(Comparator.comparingDouble(AntiResonance::impedanceOhms))
                 .map(a -> format(a.impedanceOhms(), RESISTANCE) + " at " + format(a.frequencyHz(), FREQUENCY, 4)
                         + String.format(Locale.ROOT, ", %.2f × target, Q %.1f", a.impedanceOhms() / e.impedance().targetOhms(), a.q()));
     }
 
-    static String describe(Scenario s, Evaluation e) {
+    /** Why the bank does not meet the spec, one line per reason (empty when it does). */
+    public static java.util.List<String> reasons(Scenario s, Evaluation e) {
+        String d = describe(s, e);
+        java.util.List<String> out = new java.util.ArrayList<>();
+        for (String line : d.split("\n")) {
+            if (line.startsWith("  ")) {
+                out.add(line.strip());
+            }
+        }
+        return out;
+    }
+
+    public static String describe(Scenario s, Evaluation e) {
         StringBuilder b = new StringBuilder();
         if (meetsSpec(s, e)) {
             b.append("MEETS SPEC");

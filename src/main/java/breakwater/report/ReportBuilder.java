@@ -1,0 +1,209 @@
+package breakwater.report;
+
+import breakwater.catalog.BankEntry;
+import breakwater.design.Evaluation;
+import breakwater.network.AntiResonance;
+import breakwater.optimize.SearchResult;
+import breakwater.scenario.Rail;
+import breakwater.scenario.Scenario;
+import breakwater.timedomain.Waveform;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+
+import static breakwater.units.EngineeringNotation.format;
+import static breakwater.units.Quantity.CURRENT;
+import static breakwater.units.Quantity.FREQUENCY;
+import static breakwater.units.Quantity.FRACTION;
+import static breakwater.units.Quantity.RESISTANCE;
+import static breakwater.units.Quantity.TIME;
+import static breakwater.units.Quantity.VOLTAGE;
+
+/** Turns an evaluated bank into the data of the HTML report. */
+public final class ReportBuilder {
+    /** Waveforms are thinned to about this many points for plotting (extremes are kept). */
+    static final int PLOT_POINTS = 2400;
+
+    private ReportBuilder() {
+    }
+
+    /** Everything a run knows about its bank, for the report. */
+    public record Run(String mode, Scenario scenario, String footprintName, Evaluation evaluation, Waveform droop,
+                      Waveform overshoot, Optional<SearchResult> search, List<ReportModel.Section> extraSections) {
+        public Run {
+            extraSections = List.copyOf(extraSections);
+        }
+    }
+
+    public static ReportModel build(Run run) {
+        Scenario s = run.scenario();
+        Rail r = s.rail();
+        Evaluation e = run.evaluation();
+        var wc = e.figures();
+        var m = e.impedance();
+        String currency = s.cost().currency();
+
+        List<String> subtitle = new ArrayList<>();
+        subtitle.add(ConsoleReport.volts(r.voltageV()) + " ± " + format(r.toleranceFraction(), FRACTION) + " ("
+                + ConsoleReport.volts(r.lowerLimitV()) + " .. " + ConsoleReport.volts(r.upperLimitV()) + "); load "
+                + format(r.minCurrentA(), CURRENT) + " .. " + format(r.maxCurrentA(), CURRENT) + ", ΔI "
+                + format(r.currentStepA(), CURRENT) + "; "
+                + (r.hasEdgeTime() ? "edge time " + format(r.edgeTimeS(), TIME) : "ideal load edges"));
+        subtitle.add("Target impedance Z_t = V × tolerance / ΔI = " + format(r.targetImpedanceOhms(), RESISTANCE)
+                + "; band " + format(s.band().fromHz(), FREQUENCY) + " .. " + format(s.band().toHz(), FREQUENCY)
+                + (run.footprintName().isEmpty() ? "" : "; footprint " + run.footprintName()));
+        subtitle.add("Scenario " + s.source() + (s.requireTarget() ? "; |Z| must also stay under the target" : ""));
+
+        boolean meets = Verdicts.meetsSpec(s, e);
+        ReportModel.Verdict verdict = new ReportModel.Verdict(meets,
+                meets ? "Meets the spec: the exact worst case stays inside the tolerance band"
+                        : "Does not meet the spec", Verdicts.reasons(s, e));
+
+        List<ReportModel.KeyFigure> keys = new ArrayList<>();
+        ReportModel.Tone wcTone = wc.passes() ? ReportModel.Tone.GOOD : ReportModel.Tone.BAD;
+        keys.add(new ReportModel.KeyFigure("Worst droop", format(wc.droopV(), VOLTAGE), wcTone));
+        keys.add(new ReportModel.KeyFigure("Worst overshoot", format(wc.overshootV(), VOLTAGE), wcTone));
+        keys.add(new ReportModel.KeyFigure("V_min / V_max", ConsoleReport.volts(wc.minVoltageV()) + " / "
+                + ConsoleReport.volts(wc.maxVoltageV()), wcTone));
+        keys.add(new ReportModel.KeyFigure("Margin to the limits", format(wc.marginV(), VOLTAGE), wcTone));
+        keys.add(new ReportModel.KeyFigure("Rogue factor", String.format(Locale.ROOT, "%.2f × ΔI·Z_t", wc.rogueFactor())));
+        keys.add(new ReportModel.KeyFigure("Peak |Z|", format(m.peakOhms(), RESISTANCE) + " at "
+                + format(m.peakHz(), FREQUENCY, 4) + String.format(Locale.ROOT, " (%.2f × Z_t)", m.peakOverTarget()),
+                s.requireTarget() ? (m.underTarget() ? ReportModel.Tone.GOOD : ReportModel.Tone.BAD) : ReportModel.Tone.NEUTRAL));
+        keys.add(new ReportModel.KeyFigure("Ripple in the band", String.format(Locale.ROOT, "%.2f dB", m.rippleDb())));
+        keys.add(new ReportModel.KeyFigure("Cost per board", ConsoleReport.money(e.cost().total())
+                + (currency.isEmpty() ? "" : " " + currency)));
+        keys.add(new ReportModel.KeyFigure("Parts", e.bank().totalParts() + " (" + e.bank().distinctParts() + " types)",
+                e.fitsBoard() ? ReportModel.Tone.NEUTRAL : ReportModel.Tone.BAD));
+
+        List<ReportModel.ImpedanceMarker> markers = new ArrayList<>();
+        for (AntiResonance a : m.antiResonances()) {
+            markers.add(new ReportModel.ImpedanceMarker(format(a.frequencyHz(), FREQUENCY), a.frequencyHz(), a.impedanceOhms()));
+        }
+        ReportModel.ImpedancePlot imp = new ReportModel.ImpedancePlot(List.of(impedanceSeries("|Z| at the load", e)),
+                r.targetImpedanceOhms(), s.band().fromHz(), s.band().toHz(), markers);
+        ReportModel.WaveformPlot wave = new ReportModel.WaveformPlot(
+                List.of(waveformSeries("worst-case droop pattern", run.droop())), r.voltageV(), r.lowerLimitV(), r.upperLimitV());
+
+        List<ReportModel.BomRow> rows = new ArrayList<>();
+        for (BankEntry be : e.bank().entries()) {
+            rows.add(new ReportModel.BomRow(be.part().name(), be.part().description(), be.part().caseCode(), be.count(),
+                    be.part().unitCost(), be.part().unitCost() * be.count()));
+        }
+        ReportModel.Bom bom = new ReportModel.Bom(rows, e.cost().total(), currency, String.format(Locale.ROOT,
+                "parts %.4f + placement %.4f + line items %.4f", e.cost().partsCost(), e.cost().placementCost(),
+                e.cost().lineItemCost()));
+
+        List<List<String>> resRows = new ArrayList<>();
+        for (AntiResonance a : m.antiResonances()) {
+            resRows.add(List.of(format(a.frequencyHz(), FREQUENCY, 4), format(a.impedanceOhms(), RESISTANCE),
+                    String.format(Locale.ROOT, "%.2f", a.impedanceOhms() / m.targetOhms()),
+                    String.format(Locale.ROOT, "%.2f", a.q())));
+        }
+        ReportModel.Table resonances = new ReportModel.Table("Anti-resonances in the band (local maxima of |Z|)",
+                List.of("frequency", "|Z|", "|Z| / Z_t", "Q"), resRows);
+
+        List<ReportModel.Section> sections = new ArrayList<>();
+        sections.add(ReportModel.Section.text("What the worst case means",
+                "The worst droop is the largest sag below the I_min operating point that ANY load current between "
+                        + format(r.minCurrentA(), CURRENT) + " and " + format(r.maxCurrentA(), CURRENT)
+                        + (r.hasEdgeTime() ? " slewing no faster than ΔI in " + format(r.edgeTimeS(), TIME) : "")
+                        + " can cause in this model; no pattern can do worse, and the pattern drawn above reaches it. "
+                        + "The target impedance promises an excursion of ΔI·Z_t = "
+                        + format(r.currentStepA() * r.targetImpedanceOhms(), VOLTAGE)
+                        + "; a load that switches at the rhythm of the anti-resonances piles their ringing up, which is "
+                        + "why the worst case can be several times larger (the rogue factor)."));
+        sections.add(ReportModel.Section.text("Worst-case overshoot pattern",
+                "The load pattern that drives the voltage highest above the operating point (peak "
+                        + ConsoleReport.volts(wc.maxVoltageV()) + ", limit " + ConsoleReport.volts(wc.upperLimitV()) + ").")
+                .withChart(Charts.worstCaseChart(new ReportModel.WaveformPlot(
+                        List.of(waveformSeries("worst-case overshoot pattern", run.overshoot())),
+                        r.voltageV(), r.lowerLimitV(), r.upperLimitV()))));
+        sections.addAll(run.extraSections());
+
+        List<List<String>> settings = new ArrayList<>();
+        settings.add(List.of("mode", run.mode()));
+        settings.add(List.of("scenario", s.source()));
+        settings.add(List.of("catalog", s.catalogFile().getFileName().toString()));
+        settings.add(List.of("footprint", run.footprintName().isEmpty() ? "catalog mounting inductance" : run.footprintName()));
+        run.search().ifPresent(sr -> {
+            settings.add(List.of("seed", Long.toString(sr.seed())));
+            settings.add(List.of("solvers", Integer.toString(sr.solvers())));
+            settings.add(List.of("search time", String.format(Locale.ROOT, "%.1f s", sr.seconds())));
+            settings.add(List.of("banks evaluated", Long.toString(sr.evaluations())));
+            settings.add(List.of("stopped by the user", Boolean.toString(sr.stoppedEarly())));
+        });
+        settings.add(List.of("Breakwater", Optional.ofNullable(ReportBuilder.class.getPackage().getImplementationVersion())
+                .orElse("development build")));
+        ReportModel.Table settingsTable = new ReportModel.Table("Settings", List.of("setting", "value"), settings);
+
+        List<String> cautions = List.of(ReportModel.STANDARD_CAUTION,
+                "The worst case is exact for the lumped model only: it leaves out spreading inductance across the "
+                        + "planes, the regulator's control loop below its bandwidth, temperature and ageing of the "
+                        + "parts, and DC-bias derating beyond the catalog's single retention figure.",
+                "Keep every part inside its voltage, ripple-current and temperature ratings; check the real "
+                        + "datasheets, not the catalog's typical values.");
+        return new ReportModel("Breakwater — " + (r.name().isEmpty() ? s.source() : r.name()), subtitle, verdict, keys,
+                imp, wave, bom, resonances, sections, settingsTable, cautions);
+    }
+
+    static ReportModel.ImpedanceSeries impedanceSeries(String label, Evaluation e) {
+        var c = e.curve();
+        double[] mag = new double[c.size()];
+        for (int i = 0; i < mag.length; i++) {
+            mag[i] = c.magnitudeOhms(i);
+        }
+        return new ReportModel.ImpedanceSeries(label, c.frequenciesHz(), mag);
+    }
+
+    static ReportModel.WaveformSeries waveformSeries(String label, Waveform w) {
+        double[][] thin = thin(w.timeS(), w.loadCurrentA(), w.voltageV(), PLOT_POINTS);
+        return new ReportModel.WaveformSeries(label, thin[0], thin[1], thin[2]);
+    }
+
+    /**
+     * Thins a waveform for plotting: splits it into buckets of equal sample count and keeps, from each, the
+     * first sample and the samples with the lowest and highest voltage, so peaks survive.
+     */
+    static double[][] thin(double[] t, double[] i, double[] v, int target) {
+        int n = t.length;
+        if (n <= target) {
+            return new double[][] {t, i, v};
+        }
+        int buckets = target / 3;
+        List<Integer> keep = new ArrayList<>();
+        for (int b = 0; b < buckets; b++) {
+            int lo = (int) ((long) b * n / buckets);
+            int hi = (int) ((long) (b + 1) * n / buckets);
+            int min = lo;
+            int max = lo;
+            for (int k = lo; k < hi; k++) {
+                if (v[k] < v[min]) {
+                    min = k;
+                }
+                if (v[k] > v[max]) {
+                    max = k;
+                }
+            }
+            int[] pick = {lo, Math.min(min, max), Math.max(min, max)};
+            for (int k : pick) {
+                if (keep.isEmpty() || keep.get(keep.size() - 1) < k) {
+                    keep.add(k);
+                }
+            }
+        }
+        if (keep.get(keep.size() - 1) != n - 1) {
+            keep.add(n - 1);
+        }
+        double[][] out = new double[3][keep.size()];
+        for (int k = 0; k < keep.size(); k++) {
+            int idx = keep.get(k);
+            out[0][k] = t[idx];
+            out[1][k] = i[idx];
+            out[2][k] = v[idx];
+        }
+        return out;
+    }
+}
