@@ -105,7 +105,7 @@ public final class BankEvaluator {
 
     private WorstCase worstCase(PoleResidueModel model) {
         try {
-            return WorstCaseAnalyzer.idealEdges(model); // TEMP until the slew-limited engine lands
+            return WorstCaseAnalyzer.analyze(model, scenario.rail().edgeTimeS());
         } catch (UnboundedWorstCaseException e) {
             // excluded by the constructor's check; reaching here is a bug
             throw new IllegalStateException("unbounded worst case after the constructor's check", e);

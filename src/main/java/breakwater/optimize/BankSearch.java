@@ -44,7 +44,7 @@ import java.util.concurrent.atomic.AtomicBoolean;
  */
 public final class BankSearch {
     /** Tabu search evaluates this many acceptable moves per step and takes the best of them. */
-    static final int ACCEPTED_PER_STEP = 64;
+    static final int ACCEPTED_PER_STEP = Integer.getInteger("bw.accepted", 16);
     private final JudgePool pool;
     private final List<Part> candidates;
     private final int[] maxCounts;
@@ -181,10 +181,10 @@ public final class BankSearch {
             termination.setMoveCountLimit(settings.moveLimit());
         }
         UnionMoveSelectorConfig moves = new UnionMoveSelectorConfig().withMoveSelectors(
-                new ChangeMoveSelectorConfig(),
-                new SwapMoveSelectorConfig(),
+                new ChangeMoveSelectorConfig().withFixedProbabilityWeight(1.0),
+                new SwapMoveSelectorConfig().withFixedProbabilityWeight(1.0),
                 new MoveListFactoryConfig().withMoveListFactoryClass(CountMoves.class)
-                        .withCacheType(SelectionCacheType.STEP));
+                        .withCacheType(SelectionCacheType.STEP).withFixedProbabilityWeight(8.0));
         return new SolverConfig()
                 .withSolutionClass(BankPlan.class)
                 .withEntityClasses(PartCount.class)
@@ -194,7 +194,8 @@ public final class BankSearch {
                 .withRandomSeed(seed)
                 .withMonitoringConfig(new MonitoringConfig().withSolverMetricList(List.of()))
                 .withTerminationConfig(termination)
-                .withPhases(new CustomPhaseConfig().withCustomPhaseCommands(new GreedyFill()),
+                .withPhases(new CustomPhaseConfig().withCustomPhaseCommands(
+                                new GreedyFill(seed % 2 == 0 ? GreedyFill.Rule.PER_COST : GreedyFill.Rule.STEEPEST)),
                         new LocalSearchPhaseConfig()
                         .withAcceptorConfig(new LocalSearchAcceptorConfig()
                                 .withEntityTabuSize(Math.max(1, Math.min(7, candidates.size() / 4))))

@@ -14,6 +14,20 @@ import ai.timefold.solver.core.preview.api.move.builtin.Moves;
  */
 public final class GreedyFill implements PhaseCommand<BankPlan> {
 
+    /** How additions are ranked. */
+    public enum Rule {
+        /** Most hard-violation reduction per unit of added cost: cheap banks, many small parts. */
+        PER_COST,
+        /** Most hard-violation reduction, whatever it costs: fewer, more effective parts. */
+        STEEPEST
+    }
+
+    private final Rule rule;
+
+    public GreedyFill(Rule rule) {
+        this.rule = rule;
+    }
+
     @Override
     public void changeWorkingSolution(PhaseCommandContext<BankPlan> ctx) {
         @SuppressWarnings("unchecked")
@@ -40,7 +54,7 @@ public final class GreedyFill implements PhaseCommand<BankPlan> {
                 }
                 // soft 0 is −cost in micro-units: the added cost is the drop in soft 0
                 double addedCost = Math.max(1, current.softScore(0) - s.softScore(0));
-                double ratio = hardGain / addedCost;
+                double ratio = rule == Rule.PER_COST ? hardGain / addedCost : hardGain - 1e-9 * addedCost;
                 if (ratio > bestRatio) {
                     bestRatio = ratio;
                     bestEntity = pc;

@@ -29,12 +29,15 @@ public record SearchSettings(Duration timeLimit, Duration unimprovedLimit, long 
         }
     }
 
-    /** One solver per core (at most 4), unimproved limit a third of the time limit (at least 2 s). */
+    /**
+     * One solver per core (at most 4); a solver stops early when it has not improved for half the time
+     * limit (at least 5 s, at most the limit itself).
+     */
     public static SearchSettings defaults(Duration timeLimit, long seed) {
         int cores = Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors()));
-        Duration unimproved = timeLimit.dividedBy(3);
-        if (unimproved.compareTo(Duration.ofSeconds(2)) < 0) {
-            unimproved = timeLimit.compareTo(Duration.ofSeconds(2)) < 0 ? timeLimit : Duration.ofSeconds(2);
+        Duration unimproved = timeLimit.dividedBy(2);
+        if (unimproved.compareTo(Duration.ofSeconds(5)) < 0) {
+            unimproved = timeLimit.compareTo(Duration.ofSeconds(5)) < 0 ? timeLimit : Duration.ofSeconds(5);
         }
         return new SearchSettings(timeLimit, unimproved, 0, seed, cores);
     }
