@@ -12,6 +12,10 @@ import breakwater.scenario.Footprint;
 import breakwater.scenario.Scenario;
 import breakwater.timedomain.LoadPattern;
 import breakwater.timedomain.PoleResidueModel;
+import breakwater.timedomain.ResonanceResponse;
+import breakwater.network.AntiResonance;
+import java.util.ArrayList;
+import java.util.List;
 import breakwater.timedomain.Waveform;
 import breakwater.timedomain.UnboundedWorstCaseException;
 import breakwater.timedomain.WorstCase;
@@ -74,8 +78,23 @@ public final class BankEvaluator {
         ImpedanceMetrics metrics = ImpedanceAnalysis.analyze(network, curve, scenario.band(), targetImpedanceOhms());
         PoleResidueModel model = PoleResidueModel.of(network);
         WorstCase wc = worstCase(model);
+        List<ResonanceFigures> responses = new ArrayList<>();
+        for (AntiResonance a : metrics.antiResonances()) {
+            responses.add(resonance(model, a.frequencyHz()));
+        }
         return new Evaluation(bank, network, curve, metrics, CostBreakdown.of(bank, scenario.cost()),
-                BoardCheck.violations(bank, scenario.board()), model, wc, figures(network, wc));
+                BoardCheck.violations(bank, scenario.board()), model, wc, figures(network, wc), responses);
+    }
+
+    private static ResonanceFigures resonance(PoleResidueModel model, double frequencyHz) {
+        try {
+            return new ResonanceFigures(ResonanceResponse.of(model, frequencyHz),
+                    ResonanceResponse.ownStepPeakOhms(model, frequencyHz));
+        } catch (IllegalArgumentException noOscillatingMode) {
+            // a local maximum of |Z| made by real poles only: nothing rings there
+            return new ResonanceFigures(new ResonanceResponse(frequencyHz, Double.NaN, Double.NaN, Double.NaN,
+                    Double.NaN, 0), Double.NaN);
+        }
     }
 
     /** The worst-case droop pattern laid out in time, with the load voltage it causes. */

@@ -21,6 +21,8 @@ import java.util.List;
  * @param model       pole–residue form of Z at the load node
  * @param worstCase   exact worst case per ampere of ΔI, with the patterns that reach it
  * @param figures     the worst case in volts against the tolerance band
+ * @param resonances  for each anti-resonance (same order as {@code impedance.antiResonances()}), how hard a
+ *                    load can ring it, per ampere of ΔI; NaN figures where no oscillating mode lies near it
  */
 public record Evaluation(
         CapacitorBank bank,
@@ -31,10 +33,15 @@ public record Evaluation(
         List<BoardCheck.Violation> board,
         PoleResidueModel model,
         WorstCase worstCase,
-        WorstCaseFigures figures) {
+        WorstCaseFigures figures,
+        List<ResonanceFigures> resonances) {
 
     public Evaluation {
         board = List.copyOf(board);
+        resonances = List.copyOf(resonances);
+        if (resonances.size() != impedance.antiResonances().size()) {
+            throw new IllegalArgumentException("one resonance response per anti-resonance expected");
+        }
     }
 
     public boolean fitsBoard() {

@@ -60,9 +60,11 @@ public record PowerNetwork(
      * load node. Then Z(∞) is the parallel combination of those branches' resistances.
      */
     public boolean hasFiniteHighFrequencyLimit() {
-        return loadNodeBranches().stream().anyMatch(b -> b.inductanceH() == 0.0)
-                || (!hasPackage && regulatorInductanceH == 0.0)
-                || (hasPackage && packageInductanceH == 0.0 && boardBranches.stream().anyMatch(b -> b.inductanceH() == 0.0));
+        boolean boardFinite = regulatorInductanceH == 0.0 || boardBranches.stream().anyMatch(b -> b.inductanceH() == 0.0);
+        if (!hasPackage) {
+            return boardFinite;
+        }
+        return loadBranches.stream().anyMatch(b -> b.inductanceH() == 0.0) || (packageInductanceH == 0.0 && boardFinite);
     }
 
     /** The branches directly at the load node (the board's when there is no package). */

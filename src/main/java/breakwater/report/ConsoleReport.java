@@ -74,10 +74,20 @@ public final class ConsoleReport {
         if (m.antiResonances().isEmpty()) {
             line(b, "", "no anti-resonance in the band");
         } else {
-            b.append(String.format(Locale.ROOT, "  %-14s %12s %9s %7s%n", "anti-resonance", "|Z|", "|Z|/Z_t", "Q"));
-            for (AntiResonance a : m.antiResonances()) {
-                b.append(String.format(Locale.ROOT, "  %-14s %12s %9.2f %7.2f%n", format(a.frequencyHz(), FREQUENCY, 4),
-                        format(a.impedanceOhms(), RESISTANCE), a.impedanceOhms() / m.targetOhms(), a.q()));
+            b.append(String.format(Locale.ROOT, "  %-14s %10s %8s %6s   %-36s %7s%n", "anti-resonance", "|Z|", "|Z|/Z_t",
+                    "Q", "load ΔI ringing it: step / sine / square", "cycles"));
+            for (int i = 0; i < m.antiResonances().size(); i++) {
+                AntiResonance a = m.antiResonances().get(i);
+                var rf = e.resonances().get(i);
+            var rr = rf.response();
+                double dI = r.currentStepA();
+                String ring = !rf.rings() ? "(no ringing mode)"
+                        : format(dI * rf.ownStepPeakOhms(), VOLTAGE) + " / " + format(dI * rr.sineAmplitudeOhms(), VOLTAGE)
+                        + " / " + format(dI * rr.squareAmplitudeOhms(), VOLTAGE);
+                b.append(String.format(Locale.ROOT, "  %-14s %10s %8.2f %6.2f   %-36s %7s%n",
+                        format(a.frequencyHz(), FREQUENCY, 4), format(a.impedanceOhms(), RESISTANCE),
+                        a.impedanceOhms() / m.targetOhms(), a.q(), ring,
+                        rr.cyclesTo95Percent() > 0 ? Integer.toString(rr.cyclesTo95Percent()) : "-"));
             }
         }
         return b.toString();

@@ -97,13 +97,28 @@ public final class ReportBuilder {
                 e.cost().lineItemCost()));
 
         List<List<String>> resRows = new ArrayList<>();
-        for (AntiResonance a : m.antiResonances()) {
+        for (int i = 0; i < m.antiResonances().size(); i++) {
+            AntiResonance a = m.antiResonances().get(i);
+            var rf = e.resonances().get(i);
+            var rr = rf.response();
+            double dI = r.currentStepA();
+            boolean rings = !!rf.rings();
             resRows.add(List.of(format(a.frequencyHz(), FREQUENCY, 4), format(a.impedanceOhms(), RESISTANCE),
                     String.format(Locale.ROOT, "%.2f", a.impedanceOhms() / m.targetOhms()),
-                    String.format(Locale.ROOT, "%.2f", a.q())));
+                    String.format(Locale.ROOT, "%.2f", a.q()),
+                    rings ? String.format(Locale.ROOT, "%.2f", rr.q()) : "-",
+                    rings ? format(dI * rf.ownStepPeakOhms(), VOLTAGE) : "-",
+                    rings ? format(dI * rr.sineAmplitudeOhms(), VOLTAGE) : "-",
+                    rings ? format(dI * rr.squareAmplitudeOhms(), VOLTAGE) : "-",
+                    rr.cyclesTo95Percent() > 0 ? Integer.toString(rr.cyclesTo95Percent()) : "-"));
         }
-        ReportModel.Table resonances = new ReportModel.Table("Anti-resonances in the band (local maxima of |Z|)",
-                List.of("frequency", "|Z|", "|Z| / Z_t", "Q"), resRows);
+        ReportModel.Table resonances = new ReportModel.Table(
+                "Anti-resonances in the band (local maxima of |Z|) and how hard a load swinging by ΔI rings each: "
+                        + "its step response peak, the steady-state amplitude under a sine and under a 50 % square "
+                        + "wave at the resonance, and the cycles of resonant drive needed to reach 95 % of it. "
+                        + "Q is the sharpness of the |Z| peak; pole Q the damping of the mode that rings there.",
+                List.of("frequency", "|Z|", "|Z| / Z_t", "Q", "pole Q", "step peak", "sine", "square", "cycles to 95 %"),
+                resRows);
 
         List<ReportModel.Section> sections = new ArrayList<>();
         sections.add(ReportModel.Section.text("What the worst case means",

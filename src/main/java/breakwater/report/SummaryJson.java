@@ -81,12 +81,21 @@ public final class SummaryJson {
         imp.put("ripple_db", m.rippleDb());
         imp.put("dc_resistance_ohm", e.network().dcResistanceOhms());
         ArrayNode ar = root.putArray("anti_resonances");
-        for (AntiResonance a : m.antiResonances()) {
+        for (int i = 0; i < m.antiResonances().size(); i++) {
+            AntiResonance a = m.antiResonances().get(i);
+            var rf = e.resonances().get(i);
+            var rr = rf.response();
+            double dI = r.currentStepA();
             ObjectNode o = ar.addObject();
             o.put("frequency_hz", a.frequencyHz());
             o.put("impedance_ohm", a.impedanceOhms());
             o.put("q", a.q());
             o.put("over_target", a.impedanceOhms() / m.targetOhms());
+            putNumber(o, "pole_q", rr.q());
+            putNumber(o, "step_peak_v", dI * rf.ownStepPeakOhms());
+            putNumber(o, "sine_response_v", dI * rr.sineAmplitudeOhms());
+            putNumber(o, "square_response_v", dI * rr.squareAmplitudeOhms());
+            o.put("cycles_to_95_percent", rr.cyclesTo95Percent());
         }
         ArrayNode bank = root.putArray("bank");
         for (BankEntry be : e.bank().entries()) {
@@ -112,6 +121,15 @@ public final class SummaryJson {
             o.put("actual", v.actual());
         }
         return root;
+    }
+
+    /** JSON has no NaN: a figure that does not exist is written as null. */
+    static void putNumber(ObjectNode o, String key, double v) {
+        if (Double.isFinite(v)) {
+            o.put(key, v);
+        } else {
+            o.putNull(key);
+        }
     }
 
     public static void write(ObjectNode root, Writer w) throws IOException {

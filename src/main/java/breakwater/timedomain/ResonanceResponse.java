@@ -6,8 +6,8 @@ import java.util.Locale;
  * How hard a load can ring one anti-resonance at f0, all per ampere of load step ΔI (multiply by ΔI for
  * volts), from the pole–residue form exactly:
  * <ul>
- * <li>{@code q}: Q = |p|/(2|Re p|) of the dominant pole pair at f0, the stored pair with the largest
- *     |r|/|j2πf0 − p| (its contribution to Z(j2πf0)). For one parallel resonance L ∥ (R + 1/(sC)) this is
+ * <li>{@code q}: Q = |p|/(2|Re p|) of the dominant pole pair at f0 (see {@code dominant}: the pair with the largest
+ *     |r|/|j2πf0 − p| among pairs ringing within a factor 2 of f0). For one parallel resonance L ∥ (R + 1/(sC)) this is
  *     √(L/C)/R.</li>
  * <li>{@code stepPeakOhms}: the largest value of the step response S(t) = D₀ + ∫₀^t h over t &gt; 0
  *     (its maxima lie at the + to − crossings of h, found exactly by {@link ImpulseMarch}).</li>
@@ -33,16 +33,65 @@ public record ResonanceResponse(double frequencyHz, double q, double stepPeakOhm
         }
     }
 
-    /** Analyses the anti-resonance at {@code frequencyHz} of {@code model}. */
-    public static ResonanceResponse of(PoleResidueModel model, double frequencyHz) {
-        if (!(frequencyHz > 0) || !Double.isFinite(frequencyHz)) {
-            throw new IllegalArgumentException("resonance frequency must be > 0, got " + frequencyHz);
+    /**
+     * Peak of the step response of the mode that rings at {@code frequencyHz} on its own (the dominant
+     * pole pair, chosen as for {@link #q()}), per ampere: the part of the network's step response that this
+     * anti-resonance contributes. For a pair p = σ + jω with residue r, stored once, its step response is
+     * s(t) = 2·Re(r/p·(e^{pt} − 1)); its extremes lie where Re(r·e^{pt}) = 0, i.e. at ωt + arg r = π/2 + kπ.
+     * The largest |s| over the first extremes (they shrink as e^{σt}) and the final value is returned.
+     *
+     * @throws IllegalArgumentException when no oscillating mode lies near {@code frequencyHz}
+     */
+    public static double ownStepPeakOhms(PoleResidueModel model, double frequencyHz) {
+        int dom = dominant(model, 2 * Math.PI * frequencyHz);
+        if (dom < 0) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "no oscillating mode near %.6g Hz: the network has no anti-resonance there", frequencyHz));
         }
-        double w0 = 2 * Math.PI * frequencyHz;
+        double sr = model.pr[dom];
+        double si = model.pi[dom];
+        double rr = model.rr[dom];
+        double ri = model.ri[dom];
+        double w = model.weight[dom];
+        // r/p
+        double m2 = sr * sr + si * si;
+        double qr = (rr * sr + ri * si) / m2;
+        double qi = (ri * sr - rr * si) / m2;
+        double phase = Math.atan2(ri, rr);
+        double best = Math.abs(w * qr); // final value −w·Re(r/p)·(−1) magnitude
+        double k0 = Math.ceil((phase - Math.PI / 2) / Math.PI);
+        for (int k = 0; k < 6; k++) {
+            double t = (Math.PI / 2 + (k0 + k) * Math.PI - phase) / si;
+            if (t <= 0) {
+                continue;
+            }
+            double e = Math.exp(sr * t);
+            double c = e * Math.cos(si * t) - 1;
+            double d = e * Math.sin(si * t);
+            double val = w * (qr * c - qi * d);
+            best = Math.max(best, Math.abs(val));
+        }
+        return best;
+    }
+
+    /**
+     * The oscillating mode that rings at ω0: the stored pair with the largest contribution
+     * |r|/|jω0 − p| to Z(jω0) among the pairs whose ringing frequency Im p lies within a factor 2 of ω0
+     * (among all oscillating pairs when none does), or −1 when the network has no oscillating mode.
+     */
+    private static int dominant(PoleResidueModel model, double w0) {
+        int dom = pick(model, w0, true);
+        return dom >= 0 ? dom : pick(model, w0, false);
+    }
+
+    private static int pick(PoleResidueModel model, double w0, boolean nearOnly) {
         int dom = -1;
         double best = 0;
         for (int k = 0; k < model.modes; k++) {
             if (model.pi[k] == 0.0) {
+                continue;
+            }
+            if (nearOnly && (model.pi[k] < w0 / 2 || model.pi[k] > 2 * w0)) {
                 continue;
             }
             double v = Math.hypot(model.rr[k], model.ri[k]) / Math.hypot(model.pr[k], w0 - model.pi[k]);
@@ -51,6 +100,16 @@ public record ResonanceResponse(double frequencyHz, double q, double stepPeakOhm
                 dom = k;
             }
         }
+        return dom;
+    }
+
+    /** Analyses the anti-resonance at {@code frequencyHz} of {@code model}. */
+    public static ResonanceResponse of(PoleResidueModel model, double frequencyHz) {
+        if (!(frequencyHz > 0) || !Double.isFinite(frequencyHz)) {
+            throw new IllegalArgumentException("resonance frequency must be > 0, got " + frequencyHz);
+        }
+        double w0 = 2 * Math.PI * frequencyHz;
+        int dom = dominant(model, w0);
         if (dom < 0) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
                     "no oscillating mode near %.6g Hz: the network has no anti-resonance there", frequencyHz));
