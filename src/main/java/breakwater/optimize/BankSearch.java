@@ -96,10 +96,13 @@ public final class BankSearch {
     /** Runs the search from {@code start} (may be empty) and returns the best bank. */
     public SearchResult run(SearchSettings settings, CapacitorBank start) {
         startNanos = System.nanoTime();
-        int[] startCounts = start.countsFor(candidates);
-        for (int i = 0; i < startCounts.length; i++) {
-            startCounts[i] = Math.min(startCounts[i], maxCounts[i]);
+        int[] given = start.countsFor(candidates);
+        for (int i = 0; i < given.length; i++) {
+            given[i] = Math.min(given[i], maxCounts[i]);
         }
+        offer(given);
+        int[] startCounts = pool.judge(given).feasible() ? given
+                : ImpedanceShaping.start(pool.evaluator(), candidates, maxCounts, given, c -> pool.judge(c).feasible());
         offer(startCounts);
         ExecutorService exec = Executors.newFixedThreadPool(settings.solvers(), r -> {
             Thread t = new Thread(r, "breakwater-solver");
@@ -132,10 +135,12 @@ public final class BankSearch {
                     best = c;
                 }
             }
-            // the start itself competes too (a search can only improve on it)
-            BendableScore startScore = ScoreLevels.of(pool.judge(startCounts));
-            if (startScore.compareTo(bestOfAll) > 0) {
-                best = startCounts;
+            // the starts themselves compete too (a search can only improve on them)
+            for (int[] c : new int[][] {given, startCounts}) {
+                if (ScoreLevels.of(pool.judge(c)).compareTo(bestOfAll) > 0) {
+                    bestOfAll = ScoreLevels.of(pool.judge(c));
+                    best = c;
+                }
             }
             double seconds = (System.nanoTime() - startNanos) / 1e9;
             return new SearchResult(CapacitorBank.of(candidates, best), pool.judge(best), pool.evaluations(),
