@@ -1,12 +1,12 @@
 package breakwater.cli;
 
+import breakwater.design.BankEvaluator;
 import breakwater.design.CapacitorBank;
 import breakwater.design.Judgement;
 import breakwater.optimize.BankSearch;
 import breakwater.optimize.SearchProgress;
 import breakwater.optimize.SearchResult;
 import breakwater.optimize.SearchSettings;
-import breakwater.scenario.Rail;
 import breakwater.scenario.Scenario;
 
 import java.io.PrintWriter;
@@ -21,7 +21,7 @@ final class Searches {
     }
 
     static SearchResult runWithProgress(BankSearch search, SearchSettings settings, CapacitorBank start,
-                                        PrintWriter err, boolean quiet, Scenario scenario) {
+                                        PrintWriter err, boolean quiet, BankEvaluator evaluator) {
         Thread printer = null;
         if (!quiet) {
             printer = new Thread(() -> {
@@ -29,7 +29,7 @@ final class Searches {
                     while (!Thread.currentThread().isInterrupted()) {
                         Thread.sleep(1000);
                         search.progress().ifPresent(p -> {
-                            err.println(describe(p, scenario));
+                            err.println(describe(p, evaluator));
                             err.flush();
                         });
                     }
@@ -50,20 +50,14 @@ final class Searches {
     }
 
     /** One progress line: elapsed, the best bank's verdict in words, cost, worst droop, speed. */
-    static String describe(SearchProgress p, Scenario scenario) {
+    static String describe(SearchProgress p, BankEvaluator evaluator) {
+        Scenario scenario = evaluator.scenario();
         Judgement j = p.best();
         return String.format(Locale.ROOT, "  %6.1f s  %s; cost %.4f%s; worst droop %s of %s allowed; %d parts; %.0f banks/s",
                 p.elapsedS(), inWords(j, scenario), j.costTotal(),
                 scenario.cost().currency().isEmpty() ? "" : " " + scenario.cost().currency(),
-                format(j.droopV(), VOLTAGE), format(allowedDroopV(scenario), VOLTAGE), j.totalParts(),
+                format(j.droopV(), VOLTAGE), format(evaluator.operatingPointV() - evaluator.limits().lowerV(), VOLTAGE), j.totalParts(),
                 p.evaluationsPerSecond());
-    }
-
-    private static double allowedDroopV(Scenario s) {
-        Rail r = s.rail();
-        // V_nom·tol − Z(0)·I_min; Z(0) does not depend on the bank
-        double z0 = s.regulator().resistanceOhms() + (s.packagePath().present() ? s.packagePath().resistanceOhms() : 0);
-        return r.voltageV() * r.toleranceFraction() - z0 * r.minCurrentA();
     }
 
     /** "meets spec" or what is still missing, e.g. "misses by 3.2 mV (droop)". */

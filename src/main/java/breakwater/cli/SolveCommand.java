@@ -74,7 +74,7 @@ final class SolveCommand implements Callable<Integer> {
         }
         try (StopOnInterrupt guard = new StopOnInterrupt(bankSearch)) {
             SearchResult result = Searches.runWithProgress(bankSearch, settings, CapacitorBank.EMPTY, err, output.quiet,
-                    in.scenario());
+                    evaluator);
             Evaluation e = evaluator.evaluate(result.bank());
             return Results.emit("solve", in, evaluator, e, java.util.Optional.of(result), output,
                     spec.commandLine().getOut(), err);

@@ -31,14 +31,20 @@ public final class BankEvaluator {
     private final Scenario scenario;
     private final Optional<Footprint> footprint;
     private final FrequencyGrid reportGrid;
+    private final Limits limits;
 
     /**
      * @throws InputException when the worst case would be unbounded: ideal load edges (no edge time) and
      *                        no capacitance directly at the load node, so Z(∞) is infinite
      */
     public BankEvaluator(Scenario scenario, Optional<Footprint> footprint) throws InputException {
+        this(scenario, footprint, Limits.of(scenario.rail()));
+    }
+
+    private BankEvaluator(Scenario scenario, Optional<Footprint> footprint, Limits limits) throws InputException {
         this.scenario = Objects.requireNonNull(scenario);
         this.footprint = Objects.requireNonNull(footprint);
+        this.limits = Objects.requireNonNull(limits);
         this.reportGrid = FrequencyGrid.aroundBand(scenario.band(), FrequencyGrid.DEFAULT_POINTS_PER_DECADE);
         PowerNetwork fixed = NetworkBuilder.build(scenario, java.util.List.of(), footprint);
         if (!scenario.rail().hasEdgeTime() && !fixed.hasFiniteHighFrequencyLimit()) {
@@ -50,6 +56,31 @@ public final class BankEvaluator {
                             + "[die] capacitance at the load node (behind the [package]), or a [plane] when the "
                             + "load sits at the board node."));
         }
+    }
+
+    /**
+     * The same judge with the pass/fail band narrowed to {@code limits} (never widened beyond the rail's
+     * tolerance): used to ask for a bank no worse than an existing one, or for a given excursion.
+     */
+    public BankEvaluator withLimits(Limits tighter) {
+        try {
+            return new BankEvaluator(scenario, footprint, limits.intersect(tighter));
+        } catch (InputException e) {
+            throw new IllegalStateException("the scenario was accepted once already", e);
+        }
+    }
+
+    /** The band the worst case must stay in. */
+    public Limits limits() {
+        return limits;
+    }
+
+    /** The I_min operating point V_nom − Z(0)·I_min; Z(0) = R_reg + R_pkg does not depend on the bank. */
+    public double operatingPointV() {
+        var r = scenario.rail();
+        double z0 = scenario.regulator().resistanceOhms()
+                + (scenario.packagePath().present() ? scenario.packagePath().resistanceOhms() : 0.0);
+        return r.voltageV() - z0 * r.minCurrentA();
     }
 
     public Scenario scenario() {
@@ -119,7 +150,8 @@ public final class BankEvaluator {
     }
 
     private WorstCaseFigures figures(PowerNetwork network, WorstCase wc) {
-        return WorstCaseFigures.of(scenario.rail(), network.dcResistanceOhms(), wc.droopOhms(), wc.overshootOhms());
+        return WorstCaseFigures.of(scenario.rail(), network.dcResistanceOhms(), wc.droopOhms(), wc.overshootOhms(),
+                limits.lowerV(), limits.upperV());
     }
 
     private WorstCase worstCase(PoleResidueModel model) {

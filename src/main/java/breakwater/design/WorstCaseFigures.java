@@ -21,13 +21,20 @@ import breakwater.scenario.Rail;
 public record WorstCaseFigures(double droopV, double overshootV, double operatingV, double minVoltageV,
                                double maxVoltageV, double lowerLimitV, double upperLimitV, double rogueFactor) {
 
+    /** Figures against the rail's own tolerance band. */
     public static WorstCaseFigures of(Rail rail, double dcResistanceOhms, double droopOhms, double overshootOhms) {
+        return of(rail, dcResistanceOhms, droopOhms, overshootOhms, rail.lowerLimitV(), rail.upperLimitV());
+    }
+
+    /** Figures against the given limits (the rail's band, or a tighter one; see {@link Limits}). */
+    public static WorstCaseFigures of(Rail rail, double dcResistanceOhms, double droopOhms, double overshootOhms,
+                                      double lowerLimitV, double upperLimitV) {
         double dI = rail.currentStepA();
         double droop = dI * droopOhms;
         double over = dI * overshootOhms;
         double op = rail.voltageV() - dcResistanceOhms * rail.minCurrentA();
         double promise = dI * rail.targetImpedanceOhms();
-        return new WorstCaseFigures(droop, over, op, op - droop, op + over, rail.lowerLimitV(), rail.upperLimitV(),
+        return new WorstCaseFigures(droop, over, op, op - droop, op + over, lowerLimitV, upperLimitV,
                 Math.max(droop, over) / promise);
     }
 
