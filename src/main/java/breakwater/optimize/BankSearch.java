@@ -53,6 +53,7 @@ public final class BankSearch {
     private volatile long startNanos;
     private volatile BendableScore bestScore;
     private volatile int[] bestCounts;
+    private final List<SearchResult.Improvement> history = new ArrayList<>();
 
     /**
      * @param evaluator  the judge
@@ -143,8 +144,12 @@ public final class BankSearch {
                 }
             }
             double seconds = (System.nanoTime() - startNanos) / 1e9;
+            List<SearchResult.Improvement> improvements;
+            synchronized (this) {
+                improvements = List.copyOf(history);
+            }
             return new SearchResult(CapacitorBank.of(candidates, best), pool.judge(best), pool.evaluations(),
-                    seconds, settings.seed(), settings.solvers(), stopRequested.get());
+                    seconds, settings.seed(), settings.solvers(), stopRequested.get(), improvements);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             throw new IllegalStateException("search interrupted", e);
@@ -163,10 +168,12 @@ public final class BankSearch {
     }
 
     private synchronized void offer(int[] counts) {
-        BendableScore s = ScoreLevels.of(pool.judge(counts));
+        Judgement j = pool.judge(counts);
+        BendableScore s = ScoreLevels.of(j);
         if (bestScore == null || s.compareTo(bestScore) > 0) {
             bestScore = s;
             bestCounts = counts.clone();
+            history.add(new SearchResult.Improvement((System.nanoTime() - startNanos) / 1e9, j.feasible(), j.costTotal()));
         }
     }
 

@@ -13,7 +13,26 @@ import breakwater.design.Judgement;
  * @param seed         seed of the first solver
  * @param solvers      solvers that ran
  * @param stoppedEarly whether the user stopped it (Ctrl-C)
+ * @param improvements every new best bank over all solvers, in time order
  */
 public record SearchResult(CapacitorBank bank, Judgement judgement, long evaluations, double seconds, long seed,
-                           int solvers, boolean stoppedEarly) {
+                           int solvers, boolean stoppedEarly, java.util.List<Improvement> improvements) {
+
+    public SearchResult {
+        improvements = java.util.List.copyOf(improvements);
+    }
+
+    /** A new best: when (seconds since the start), whether it met the spec, its cost. */
+    public record Improvement(double atSeconds, boolean feasible, double costTotal) {
+    }
+
+    /** Seconds until the first bank that meets the spec and costs at most {@code cost}, or NaN if never. */
+    public double secondsToReach(double cost) {
+        for (Improvement i : improvements) {
+            if (i.feasible() && i.costTotal() <= cost) {
+                return i.atSeconds();
+            }
+        }
+        return Double.NaN;
+    }
 }

@@ -1,7 +1,6 @@
 package breakwater.bench;
 
 import org.openjdk.jmh.runner.Runner;
-import org.openjdk.jmh.runner.RunnerException;
 import org.openjdk.jmh.runner.options.Options;
 import org.openjdk.jmh.runner.options.OptionsBuilder;
 import org.openjdk.jmh.runner.options.TimeValue;
@@ -12,7 +11,11 @@ public final class BenchMain {
     private BenchMain() {
     }
 
-    public static void main(String[] args) throws RunnerException {
+    public static void main(String[] args) throws Exception {
+        if (args.length > 0 && args[0].equals("convergence")) {
+            SolveConvergence.main(args);
+            return;
+        }
         String include = args.length > 0 && !args[0].isBlank() ? args[0] : ".*";
         Options options = new OptionsBuilder()
                 .include(include)
