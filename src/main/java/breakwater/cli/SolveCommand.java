@@ -72,7 +72,7 @@ final class SolveCommand implements Callable<Integer> {
                     settings.moveLimit() > 0 ? ", move limit " + settings.moveLimit() : "");
             err.flush();
         }
-        try (StopOnInterrupt guard = new StopOnInterrupt(bankSearch)) {
+        try (StopOnInterrupt guard = new StopOnInterrupt(bankSearch, err)) {
             SearchResult result = Searches.runWithProgress(bankSearch, settings, CapacitorBank.EMPTY, err, output.quiet,
                     evaluator);
             Evaluation e = evaluator.evaluate(result.bank());

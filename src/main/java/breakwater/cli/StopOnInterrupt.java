@@ -1,30 +1,40 @@
 package breakwater.cli;
 
 import breakwater.optimize.BankSearch;
+import sun.misc.Signal;
+import sun.misc.SignalHandler;
 
-import java.util.concurrent.CountDownLatch;
-import java.util.concurrent.TimeUnit;
+import java.io.PrintWriter;
 
 /**
- * Ctrl-C during a search: stop the solvers, let the command write the best bank found, then exit.
- * The shutdown hook waits (up to a minute) until {@link #close()} says the outputs are written.
+ * Ctrl-C during a search: the first one stops the solvers, and the command goes on to write the best bank
+ * found; a second one ends the program at once. The signal is intercepted (rather than handled in a
+ * shutdown hook) so that writing the results runs in a normal, living JVM.
  */
 final class StopOnInterrupt implements AutoCloseable {
-    private final CountDownLatch finished = new CountDownLatch(1);
-    private final Thread hook;
+    private static final Signal INT = new Signal("INT");
+
+    private final SignalHandler previous;
     private volatile boolean interrupted;
 
-    StopOnInterrupt(BankSearch search) {
-        hook = new Thread(() -> {
-            interrupted = true;
-            search.stop();
-            try {
-                finished.await(60, TimeUnit.SECONDS);
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-            }
-        }, "breakwater-interrupt");
-        Runtime.getRuntime().addShutdownHook(hook);
+    StopOnInterrupt(BankSearch search, PrintWriter err) {
+        SignalHandler installed;
+        try {
+            installed = Signal.handle(INT, sig -> {
+                if (interrupted) {
+                    err.println("breakwater: interrupted again; stopping without writing results.");
+                    err.flush();
+                    Runtime.getRuntime().halt(130);
+                }
+                interrupted = true;
+                err.println("breakwater: stopping the search (Ctrl-C again to quit at once); writing the best bank found ...");
+                err.flush();
+                search.stop();
+            });
+        } catch (IllegalArgumentException unsupported) {
+            installed = null; // no SIGINT on this platform: Ctrl-C keeps its default meaning
+        }
+        previous = installed;
     }
 
     boolean interrupted() {
@@ -33,11 +43,8 @@ final class StopOnInterrupt implements AutoCloseable {
 
     @Override
     public void close() {
-        finished.countDown();
-        try {
-            Runtime.getRuntime().removeShutdownHook(hook);
-        } catch (IllegalStateException shuttingDown) {
-            // the JVM is already exiting because of Ctrl-C; the hook sees the latch and lets it go
+        if (previous != null) {
+            Signal.handle(INT, previous);
         }
     }
 }
