@@ -130,6 +130,16 @@ public final class ReportBuilder {
                         + format(r.currentStepA() * r.targetImpedanceOhms(), VOLTAGE)
                         + "; a load that switches at the rhythm of the anti-resonances piles their ringing up, which is "
                         + "why the worst case can be several times larger (the rogue factor)."));
+        double window = closeUpWindowS(m, r.edgeTimeS(), run.droop());
+        ReportModel.WaveformSeries close = crop("worst-case droop pattern, close-up", run.droop(), window);
+        if (close != null) {
+            sections.add(ReportModel.Section.text("Close-up: the last " + format(window, TIME) + " before the worst instant",
+                    "The fast part of the same droop pattern, with time counted from the worst instant: how the "
+                            + "load times its swings against the highest anti-resonances" + (r.hasEdgeTime() ? ", never faster than ΔI in " + format(r.edgeTimeS(), TIME) : "")
+                            + ".")
+                    .withChart(Charts.worstCaseChart(new ReportModel.WaveformPlot(List.of(close), r.voltageV(),
+                            r.lowerLimitV(), r.upperLimitV()))));
+        }
         sections.add(ReportModel.Section.text("Worst-case overshoot pattern",
                 "The load pattern that drives the voltage highest above the operating point (peak "
                         + ConsoleReport.volts(wc.maxVoltageV()) + ", limit " + ConsoleReport.volts(wc.upperLimitV()) + ").")
@@ -162,6 +172,49 @@ public final class ReportBuilder {
                         + "datasheets, not the catalog's typical values.");
         return new ReportModel("Breakwater — " + (r.name().isEmpty() ? s.source() : r.name()), subtitle, verdict, keys,
                 imp, wave, bom, resonances, sections, settingsTable, cautions);
+    }
+
+    /**
+     * Length of the close-up: eight periods of the highest anti-resonance in the band (at least 40 edge
+     * times), but never more than half the pattern.
+     */
+    static double closeUpWindowS(breakwater.network.ImpedanceMetrics m, double edgeTimeS, Waveform w) {
+        double fTop = m.antiResonances().stream().mapToDouble(AntiResonance::frequencyHz).max().orElse(0);
+        double window = fTop > 0 ? 8 / fTop : 0;
+        window = Math.max(window, 40 * edgeTimeS);
+        double length = w.worstInstantS();
+        return window > 0 ? Math.min(window, length / 2) : length / 2;
+    }
+
+    /**
+     * The part of {@code w} from {@code window} before its worst instant to a quarter window after, with time
+     * counted from the worst instant; null if too short.
+     */
+    static ReportModel.WaveformSeries crop(String label, Waveform w, double window) {
+        double[] t = w.timeS();
+        double[] i = w.loadCurrentA();
+        double[] v = w.voltageV();
+        double from = w.worstInstantS() - window;
+        double to = w.worstInstantS() + window / 4;
+        int a = 0;
+        while (a < t.length && t[a] < from) {
+            a++;
+        }
+        int b = a;
+        while (b < t.length && t[b] <= to) {
+            b++;
+        }
+        if (b - a < 4) {
+            return null;
+        }
+        double[] tt = java.util.Arrays.copyOfRange(t, a, b);
+        for (int k = 0; k < tt.length; k++) {
+            tt[k] -= w.worstInstantS(); // time 0 is the worst instant
+        }
+        double[] ii = java.util.Arrays.copyOfRange(i, a, b);
+        double[] vv = java.util.Arrays.copyOfRange(v, a, b);
+        double[][] thin = thin(tt, ii, vv, PLOT_POINTS);
+        return new ReportModel.WaveformSeries(label, thin[0], thin[1], thin[2]);
     }
 
     static ReportModel.ImpedanceSeries impedanceSeries(String label, Evaluation e) {
