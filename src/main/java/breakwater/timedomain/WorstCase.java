@@ -29,4 +29,9 @@ public record WorstCase(double droopOhms, double overshootOhms, LoadPattern droo
     public double peakToPeakOhms() {
         return droopOhms + overshootOhms;
     }
+
+    /** The figures alone, without the patterns. */
+    public WorstCaseFigures figures() {
+        return new WorstCaseFigures(droopOhms, overshootOhms, edgeTimeS);
+    }
 }

@@ -26,6 +26,15 @@ public final class WorstCaseAnalyzer {
      * @throws UnboundedWorstCaseException when Z(∞) is infinite (series inductance at the load node)
      */
     public static WorstCase idealEdges(PoleResidueModel model) throws UnboundedWorstCaseException {
+        IdealSink sink = idealMarch(model, true);
+        double d = model.directTermOhms();
+        LoadPattern droopPattern = sink.pattern(true, d > 0);
+        LoadPattern overshootPattern = sink.pattern(false, d < 0);
+        return new WorstCase(sink.droop, Math.max(sink.overshoot, 0), droopPattern, overshootPattern, 0.0);
+    }
+
+    /** The ideal-edge march with the identity check; {@code crossings}: keep the sign changes for patterns. */
+    private static IdealSink idealMarch(PoleResidueModel model, boolean crossings) throws UnboundedWorstCaseException {
         if (!model.hasFiniteDirectTerm()) {
             throw new UnboundedWorstCaseException(String.format(Locale.ROOT,
                     "rail.edge_time: the worst case is unbounded with ideal load edges, because the load node "
@@ -35,7 +44,7 @@ public final class WorstCaseAnalyzer {
                     model.seriesInductanceH()));
         }
         double d = model.directTermOhms();
-        IdealSink sink = new IdealSink();
+        IdealSink sink = new IdealSink(crossings);
         new ImpulseMarch(model).run(IDEAL_TAIL_TOLERANCE, sink);
         double droop = sink.positive + Math.max(d, 0);
         double overshoot = sink.negative + Math.max(-d, 0);
@@ -45,9 +54,9 @@ public final class WorstCaseAnalyzer {
                     "worst-case integration fails the identity droop - overshoot = Z(0): %.12g - %.12g vs %.12g",
                     droop, overshoot, z0));
         }
-        LoadPattern droopPattern = sink.pattern(true, d > 0);
-        LoadPattern overshootPattern = sink.pattern(false, d < 0);
-        return new WorstCase(droop, Math.max(overshoot, 0), droopPattern, overshootPattern, 0.0);
+        sink.droop = droop;
+        sink.overshoot = overshoot;
+        return sink;
     }
 
     /**
@@ -81,25 +90,74 @@ public final class WorstCaseAnalyzer {
      * @param edgeTimeS t_e &gt; 0
      */
     public static WorstCase edgeLimited(PoleResidueModel model, double edgeTimeS) {
+        checkEdgeTime(edgeTimeS);
+        Workspace ws = WORKSPACE.get();
+        int n = prepare(model, edgeTimeS, ws);
+        double[] lags = java.util.Arrays.copyOf(ws.lags, n);
+        double[] uDroop = new double[n];
+        double droop = ChainDp.solve(ws.w, 1.0, ws.c, n, uDroop, ws.dp);
+        double[] uOver = new double[n];
+        double overshoot = ChainDp.solve(ws.w, -1.0, ws.c, n, uOver, ws.dp);
+        checkRecovered(ws.w, 1.0, n, uDroop, droop, "droop");
+        checkRecovered(ws.w, -1.0, n, uOver, overshoot, "overshoot");
+        return new WorstCase(Math.max(droop, 0), Math.max(overshoot, 0), new LoadPattern(lags, uDroop),
+                new LoadPattern(lags, uOver), edgeTimeS);
+    }
+
+    /**
+     * The worst-case figures alone, for scoring many candidates: the droop and overshoot that
+     * {@link #analyze} returns for the same arguments (the same computation, bit for bit), without
+     * building the load patterns. Reuses per-thread scratch buffers; safe to call from several threads.
+     *
+     * @throws UnboundedWorstCaseException when t_e = 0 and Z(∞) is infinite
+     */
+    public static WorstCaseFigures figures(PoleResidueModel model, double edgeTimeS)
+            throws UnboundedWorstCaseException {
+        if (!(edgeTimeS >= 0) || !Double.isFinite(edgeTimeS)) {
+            throw new IllegalArgumentException("edge time must be finite and >= 0, got " + edgeTimeS);
+        }
+        if (edgeTimeS == 0) {
+            IdealSink sink = idealMarch(model, false);
+            return new WorstCaseFigures(sink.droop, Math.max(sink.overshoot, 0), 0.0);
+        }
+        Workspace ws = WORKSPACE.get();
+        int n = prepare(model, edgeTimeS, ws);
+        double droop = ChainDp.maximum(ws.w, 1.0, ws.c, n, ws.dp);
+        double overshoot = ChainDp.maximum(ws.w, -1.0, ws.c, n, ws.dp);
+        return new WorstCaseFigures(Math.max(droop, 0), Math.max(overshoot, 0), edgeTimeS);
+    }
+
+    /** The objective weights of the edge-limited path on {@link #lagGrid}'s lags (a copy, for cross-checks). */
+    static double[] gridObjectiveWeights(PoleResidueModel model, double edgeTimeS) {
+        Workspace ws = new Workspace();
+        int n = prepare(model, edgeTimeS, ws);
+        return java.util.Arrays.copyOf(ws.w, n);
+    }
+
+    private static void checkEdgeTime(double edgeTimeS) {
         if (!(edgeTimeS > 0) || !Double.isFinite(edgeTimeS)) {
             throw new IllegalArgumentException("edge-limited worst case needs an edge time > 0, got " + edgeTimeS);
         }
-        double[] lags = lagGrid(model, edgeTimeS);
-        double[] w = objectiveWeights(model, lags);
-        double[] c = stepLimits(lags, edgeTimeS);
-        int n = lags.length;
-        double[] uDroop = new double[n];
-        double droop = ChainDp.solve(w, c, uDroop);
-        double[] neg = new double[n];
-        for (int k = 0; k < n; k++) {
-            neg[k] = -w[k];
+    }
+
+    /**
+     * Lag grid, objective weights and step limits of the chain LP into {@code ws}; returns the number of
+     * nodes. Step limits c_k = (τ_{k+1} − τ_k)/t_e from the lags as stored, so the pattern of
+     * {@link #edgeLimited} keeps its slope limit to rounding.
+     */
+    private static int prepare(PoleResidueModel model, double edgeTimeS, Workspace ws) {
+        Grid grid = ws.grid;
+        buildGrid(model, edgeTimeS, grid);
+        int n = grid.nodes;
+        ws.ensure(n);
+        gridWeights(model, grid, ws);
+        double[] c = ws.c;
+        grid.fillLags(ws.lags);
+        double[] lags = ws.lags;
+        for (int k = 0; k + 1 < n; k++) {
+            c[k] = (lags[k + 1] - lags[k]) / edgeTimeS;
         }
-        double[] uOver = new double[n];
-        double overshoot = ChainDp.solve(neg, c, uOver);
-        checkRecovered(w, uDroop, droop, "droop");
-        checkRecovered(neg, uOver, overshoot, "overshoot");
-        return new WorstCase(Math.max(droop, 0), Math.max(overshoot, 0), new LoadPattern(lags, uDroop),
-                new LoadPattern(lags, uOver), edgeTimeS);
+        return n;
     }
 
     /** Optimum of the chain LP on a given lag grid (for cross-checks); u receives the optimal pattern. */
@@ -137,11 +195,11 @@ public final class WorstCaseAnalyzer {
         return sum;
     }
 
-    private static void checkRecovered(double[] w, double[] u, double value, String what) {
+    private static void checkRecovered(double[] w, double sign, int n, double[] u, double value, String what) {
         double sum = 0;
         double scale = 0;
-        for (int k = 0; k < w.length; k++) {
-            sum += w[k] * u[k];
+        for (int k = 0; k < n; k++) {
+            sum += sign * w[k] * u[k];
             scale += Math.abs(w[k]);
         }
         if (!(Math.abs(sum - value) <= 1e-9 * scale)) {
@@ -177,45 +235,111 @@ public final class WorstCaseAnalyzer {
      * T_min/{@value #FINEST_FRACTION}) over 24 periods of the fastest mode (at least 16 t_e); then blocks
      * of 16 steps, each block's step doubled but never above 1/48 of the period of any mode still alive;
      * until every mode has decayed to {@link #GRID_TAIL_TOLERANCE} (tail bound |w r| e^{Re(p) τ}/|Re p|
-     * relative to Σ|w r|/|Re p|). Runs of equal steps let the hat weights reuse e^{pΔ}.
+     * relative to Σ|w r|/|Re p|). Runs of equal steps let the hat weights reuse e^{pΔ}. Within a run
+     * the lags are τ_{j₀} + i·Δ (one rounding each, no drift), so the nominal steps that the hat weights
+     * are computed with match the lags to rounding.
      */
     static double[] lagGrid(PoleResidueModel m, double edgeTimeS) {
+        Grid grid = new Grid();
+        buildGrid(m, edgeTimeS, grid);
+        return grid.lags();
+    }
+
+    /**
+     * A lag grid as runs of equal steps: run r holds count[r] steps of step[r], from τ_0 = 0; within a
+     * run τ_{j₀ + i} = τ_{j₀} + i·step ({@link #lags()}).
+     */
+    static final class Grid {
+        double[] step = new double[16];
+        int[] count = new int[16];
+        int runs;
+        /** Number of lags (nodes), steps + 1. */
+        int nodes;
+        double[] period = new double[0];
+        double[] dead = new double[0];
+
+        void clear(int modes) {
+            runs = 0;
+            nodes = 1;
+            if (period.length < modes) {
+                period = new double[modes];
+                dead = new double[modes];
+            }
+        }
+
+        void add(double s) {
+            nodes++;
+            if (runs > 0 && step[runs - 1] == s) {
+                count[runs - 1]++;
+                return;
+            }
+            if (runs == step.length) {
+                step = java.util.Arrays.copyOf(step, 2 * runs);
+                count = java.util.Arrays.copyOf(count, 2 * runs);
+            }
+            step[runs] = s;
+            count[runs] = 1;
+            runs++;
+        }
+
+        double[] lags() {
+            double[] lags = new double[nodes];
+            fillLags(lags);
+            return lags;
+        }
+
+        void fillLags(double[] lags) {
+            lags[0] = 0;
+            double base = 0;
+            int k = 1;
+            for (int r = 0; r < runs; r++) {
+                double s = step[r];
+                int q = count[r];
+                for (int i = 1; i <= q; i++) {
+                    lags[k++] = base + i * s;
+                }
+                base = lags[k - 1];
+            }
+        }
+    }
+
+    /** The grid of {@link #lagGrid}, as runs. */
+    static void buildGrid(PoleResidueModel m, double edgeTimeS, Grid grid) {
         int nm = m.modes;
-        double[] period = new double[nm];
-        double[] dead = new double[nm];
+        grid.clear(nm);
+        if (nm == 0) {
+            grid.add(edgeTimeS / 8);
+            return;
+        }
+        double[] period = grid.period;
+        double[] dead = grid.dead;
         double total = 0;
-        double[] b0 = new double[nm];
         for (int k = 0; k < nm; k++) {
-            b0[k] = m.weight[k] * Math.hypot(m.rr[k], m.ri[k]) / -m.pr[k];
-            total += b0[k];
+            total += m.weight[k] * Math.hypot(m.rr[k], m.ri[k]) / -m.pr[k];
         }
         double tMin = Double.POSITIVE_INFINITY;
         double end = 0;
         for (int k = 0; k < nm; k++) {
+            double b0 = m.weight[k] * Math.hypot(m.rr[k], m.ri[k]) / -m.pr[k];
             period[k] = 2 * Math.PI / Math.hypot(m.pr[k], m.pi[k]);
-            double ratio = b0[k] / (GRID_TAIL_TOLERANCE * total);
+            double ratio = b0 / (GRID_TAIL_TOLERANCE * total);
             dead[k] = ratio > 1 ? Math.log(ratio) / -m.pr[k] : 0;
             end = Math.max(end, dead[k]);
             tMin = Math.min(tMin, period[k]);
         }
-        if (nm == 0) {
-            return new double[]{0, edgeTimeS / 8};
-        }
         double step = Math.max(Math.min(edgeTimeS / 8, tMin / COARSEST_FRACTION), tMin / FINEST_FRACTION);
         double fineEnd = Math.min(Math.max(24 * tMin, 16 * edgeTimeS), Math.max(end, step));
-        DoubleList lags = new DoubleList(1024);
-        lags.add(0);
         double tau = 0;
         if (m.seriesInductanceH() > 0 && edgeTimeS / 8 < step) {
             // the series-inductance term L·(u₀ − u₁)/(τ₁ − τ₀) reaches L/t_e only with τ₁ ≤ t_e
             for (int i = 0; i < 16; i++) {
                 tau += edgeTimeS / 8;
-                lags.add(tau);
+                grid.add(edgeTimeS / 8);
             }
         }
         while (tau < fineEnd) {
             tau += step;
-            lags.add(tau);
+            grid.add(step);
         }
         while (tau < end) {
             double cap = Double.POSITIVE_INFINITY;
@@ -229,13 +353,163 @@ public final class WorstCaseAnalyzer {
             }
             for (int i = 0; i < 16 && tau < end; i++) {
                 tau += step;
-                lags.add(tau);
+                grid.add(step);
             }
         }
-        if (lags.size() < 2) {
-            lags.add(step);
+        if (grid.nodes < 2) {
+            grid.add(step);
         }
-        return lags.toArray();
+    }
+
+    /** Nodes per block of the weight computation: powers e^{pmΔ}, m &lt; BLOCK, are tabulated per run. */
+    private static final int BLOCK = 32;
+
+    /** Reusable buffers of one thread: grid, weights, step limits, dynamic-program scratch. */
+    private static final class Workspace {
+        final Grid grid = new Grid();
+        final ChainDp.Scratch dp = new ChainDp.Scratch();
+        double[] w = new double[0];
+        double[] c = new double[0];
+        double[] lags = new double[0];
+        final double[] qr = new double[BLOCK + 1];
+        final double[] qi = new double[BLOCK + 1];
+        final double[] gr = new double[BLOCK];
+        final double[] gi = new double[BLOCK];
+        final double[] f = new double[4];
+
+        void ensure(int nodes) {
+            if (w.length < nodes) {
+                int n = Math.max(nodes, 2 * w.length);
+                w = new double[n];
+                c = new double[n];
+                lags = new double[n];
+            }
+        }
+    }
+
+    private static final ThreadLocal<Workspace> WORKSPACE = ThreadLocal.withInitial(Workspace::new);
+
+    /**
+     * {@link #objectiveWeights} on a grid of runs, into {@code ws.w[0 .. nodes − 1]}. Within a run of q
+     * steps Δ from node j₀ the hat weights of one mode (amplitude a = w r e^{pτ_{j₀}}) are
+     * Re(a·F_L) to node j₀, Re(a·e^{pmΔ}·G) with G = e^{pΔ}F_L + F_R to the inner node j₀ + 1 + m, and
+     * Re(a·e^{p(q−1)Δ}·F_R) to node j₀ + q (F_L = Δ f_L(pΔ), F_R = Δ f_R(pΔ), {@link Waveform#hatIntegrals}).
+     * The powers e^{pmΔ}, m ≤ {@value #BLOCK}, are tabulated by repeated squaring and the inner nodes
+     * filled block by block (an element-wise loop), the amplitude advancing by e^{p·BLOCK·Δ}. The same
+     * closed forms as the lag-by-lag sum, up to rounding (about 1e-13 relative). A mode is dropped once
+     * its amplitude is below 1e-18 of Σ|w r|/|Re p| times |Re p| (its whole remaining integral).
+     */
+    private static void gridWeights(PoleResidueModel m, Grid grid, Workspace ws) {
+        int n = grid.nodes;
+        double[] w = ws.w;
+        java.util.Arrays.fill(w, 0, n, 0.0);
+        double[] qr = ws.qr;
+        double[] qi = ws.qi;
+        double[] gr = ws.gr;
+        double[] gi = ws.gi;
+        double[] f = ws.f;
+        double total = 0;
+        for (int k = 0; k < m.modes; k++) {
+            total += m.weight[k] * Math.hypot(m.rr[k], m.ri[k]) / -m.pr[k];
+        }
+        for (int k = 0; k < m.modes; k++) {
+            double pr = m.pr[k];
+            double pi = m.pi[k];
+            double ar = m.weight[k] * m.rr[k];
+            double ai = m.weight[k] * m.ri[k];
+            double negligible = 1e-18 * total * -pr;
+            boolean alive = true;
+            int j0 = 0;
+            for (int r = 0; r < grid.runs && alive; r++) {
+                double dt = grid.step[r];
+                int q = grid.count[r];
+                double zr = pr * dt;
+                double zi = pi * dt;
+                double e = Math.exp(zr);
+                double er = e * Math.cos(zi);
+                double ei = e * Math.sin(zi);
+                Waveform.hatIntegrals(zr, zi, er, ei, f);
+                double frr = f[0] * dt;
+                double fri = f[1] * dt;
+                double flr = f[2] * dt;
+                double fli = f[3] * dt;
+                // node j0: the left half-hat of the run's first segment
+                w[j0] += ar * flr - ai * fli;
+                // powers e^{pmΔ}, m = 0 … b, by doubling
+                int b = Math.min(BLOCK, q - 1);
+                qr[0] = 1;
+                qi[0] = 0;
+                int have = 1;
+                double pwr = er;
+                double pwi = ei;
+                while (have <= b) {
+                    int add = Math.min(have, b + 1 - have);
+                    for (int i = 0; i < add; i++) {
+                        qr[have + i] = qr[i] * pwr - qi[i] * pwi;
+                        qi[have + i] = qr[i] * pwi + qi[i] * pwr;
+                    }
+                    have += add;
+                    double t = pwr * pwr - pwi * pwi;
+                    pwi = 2 * pwr * pwi;
+                    pwr = t;
+                }
+                // G·e^{pmΔ}, m < b
+                double glr = er * flr - ei * fli + frr;
+                double gli = er * fli + ei * flr + fri;
+                for (int i = 0; i < b; i++) {
+                    gr[i] = glr * qr[i] - gli * qi[i];
+                    gi[i] = glr * qi[i] + gli * qr[i];
+                }
+                // inner nodes j0 + 1 + i, i = 0 … q − 2, in blocks of b
+                double cr = ar;
+                double ci = ai;
+                int inner = q - 1;
+                int i0 = 0;
+                while (b > 0 && i0 + b <= inner) {
+                    int base = j0 + 1 + i0;
+                    for (int i = 0; i < b; i++) {
+                        w[base + i] += cr * gr[i] - ci * gi[i];
+                    }
+                    double t = cr * qr[b] - ci * qi[b];
+                    ci = cr * qi[b] + ci * qr[b];
+                    cr = t;
+                    i0 += b;
+                    if (Math.abs(cr) + Math.abs(ci) < negligible) {
+                        alive = false;
+                        break;
+                    }
+                }
+                if (!alive) {
+                    break;
+                }
+                int rest = inner - i0;
+                int base = j0 + 1 + i0;
+                for (int i = 0; i < rest; i++) {
+                    w[base + i] += cr * gr[i] - ci * gi[i];
+                }
+                // amplitude at node j0 + q − 1 = c·e^{p·rest·Δ}; its right half-hat goes to node j0 + q
+                double lr = cr * qr[rest] - ci * qi[rest];
+                double li = cr * qi[rest] + ci * qr[rest];
+                w[j0 + q] += lr * frr - li * fri;
+                ar = lr * er - li * ei;
+                ai = lr * ei + li * er;
+                j0 += q;
+                if (Math.abs(ar) + Math.abs(ai) < negligible) {
+                    alive = false;
+                }
+            }
+            if (alive) {
+                // ∫_{τ_n}^∞ e^{pτ} dτ = −e^{pτ_n}/p
+                double p2 = pr * pr + pi * pi;
+                w[n - 1] += -(ar * pr + ai * pi) / p2;
+            }
+        }
+        w[0] += m.constantTermOhms();
+        if (m.seriesInductanceH() > 0) {
+            double g = m.seriesInductanceH() / grid.step[0];
+            w[0] += g;
+            w[1] -= g;
+        }
     }
 
     /**
@@ -317,9 +591,17 @@ public final class WorstCaseAnalyzer {
     private static final class IdealSink implements ImpulseMarch.Sink {
         double positive;
         double negative;
+        double droop;
+        double overshoot;
         boolean firstPositive;
         boolean any;
-        final DoubleList ends = new DoubleList(64);
+        final boolean keepEnds;
+        final DoubleList ends;
+
+        IdealSink(boolean keepEnds) {
+            this.keepEnds = keepEnds;
+            this.ends = new DoubleList(keepEnds ? 64 : 0);
+        }
 
         @Override
         public void interval(double startS, double endS, double integral, boolean pos) {
@@ -332,7 +614,9 @@ public final class WorstCaseAnalyzer {
             } else {
                 negative -= integral;
             }
-            ends.add(endS);
+            if (keepEnds) {
+                ends.add(endS);
+            }
         }
 
         /** u = 1 on the intervals of the wanted sign; {@code spike}: u(0) = 1 to collect D·δ. */
