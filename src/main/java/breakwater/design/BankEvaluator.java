@@ -146,7 +146,15 @@ public final class BankEvaluator {
 
     /** The exact worst case of {@code network} in volts: the one computation solver and reports share. */
     public WorstCaseFigures worstCaseFigures(PowerNetwork network) {
-        return figures(network, worstCase(PoleResidueModel.of(network)));
+        breakwater.timedomain.WorstCaseFigures f;
+        try {
+            // the figures-only path: the same exact values as analyze(), without building the patterns
+            f = WorstCaseAnalyzer.figures(PoleResidueModel.of(network), scenario.rail().edgeTimeS());
+        } catch (UnboundedWorstCaseException e) {
+            throw new IllegalStateException("unbounded worst case after the constructor's check", e);
+        }
+        return WorstCaseFigures.of(scenario.rail(), network.dcResistanceOhms(), f.droopOhms(), f.overshootOhms(),
+                limits.lowerV(), limits.upperV());
     }
 
     private WorstCaseFigures figures(PowerNetwork network, WorstCase wc) {
