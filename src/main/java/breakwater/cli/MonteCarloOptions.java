@@ -17,7 +17,7 @@ final class MonteCarloOptions {
     @Option(names = "--monte-carlo", paramLabel = "N",
             description = {"After the bank is chosen, judge N variants of it with parts drawn within their "
                     + "tolerances (uniform): capacitance within the catalog's tolerance column, else by "
-                    + "dielectric C0G 5 %, X7R 10 %, X5R 20 %, polymer/tantalum/other 20 %; ESR and ESL within "
+                    + "dielectric C0G 5 %%, X7R 10 %%, X5R 20 %%, polymer/tantalum/other 20 %%; ESR and ESL within "
                     + "--spread. All parts of one type move together (one reel: the pessimistic choice). "
                     + "Reports the worst droop and overshoot distribution (p50, p95, p99, max) and the yield."})
     int samples;
