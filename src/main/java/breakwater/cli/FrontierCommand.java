@@ -121,6 +121,16 @@ final class FrontierCommand implements Callable<Integer> {
                 format(f.tightestV(), VOLTAGE), format(f.allowedV(), VOLTAGE), pts.size(),
                 Durations.describe(all.timeLimit()), pts.size() + 1, Durations.describe(each.timeLimit()),
                 interrupted ? " (stopped by the user)" : ""));
+        double op = f.points().get(0).evaluation().figures().operatingV();
+        double droopAllowed = op - in.scenario().rail().lowerLimitV();
+        double overAllowed = in.scenario().rail().upperLimitV() - op;
+        String asymmetric = Math.abs(droopAllowed - overAllowed) > 1e-12 ? String.format(Locale.ROOT,
+                "each limit holds both worst droop and worst overshoot, and never beyond the spec, which allows %s of "
+                        + "droop and %s of overshoot from the %s operating point", format(droopAllowed, VOLTAGE),
+                format(overAllowed, VOLTAGE), format(op, VOLTAGE)) : "";
+        if (!asymmetric.isEmpty()) {
+            c.append(String.format(Locale.ROOT, "%-10s %s%n", "", asymmetric));
+        }
         c.append(String.format(Locale.ROOT, "  %-10s %10s %6s %12s %15s %6s  %-28s%n", "limit", "cost", "parts",
                 "worst droop", "worst overshoot", "meets", "vs. the spec's bank"));
         for (int i = 0; i < rows.size(); i++) {
@@ -153,7 +163,7 @@ final class FrontierCommand implements Callable<Integer> {
                         + "started from the previous, tighter limit's bank. A tighter limit never costs less here: where "
                         + "a search returned a dearer bank, the tighter limit's bank is used (see the notes).",
                 format(f.tightestV(), VOLTAGE), format(f.allowedV(), VOLTAGE), Durations.describe(each.timeLimit()),
-                Durations.describe(all.timeLimit()), pts.size() + 1);
+                Durations.describe(all.timeLimit()), pts.size() + 1) + (asymmetric.isEmpty() ? "" : " Note: " + asymmetric + ".");
         ReportModel.Section section = new ReportModel.Section("Cost against worst excursion", List.of(intro),
                 List.of(new ReportModel.Table("Frontier, tightest limit first", headers, rows)), List.of(chart));
         return RunExtras.of(List.of(section), json -> {
