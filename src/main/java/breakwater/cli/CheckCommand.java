@@ -41,13 +41,18 @@ final class CheckCommand implements Callable<Integer> {
     @Mixin
     OutputOptions output;
 
+    @Mixin
+    MonteCarloOptions monteCarlo;
+
     @Override
     public Integer call() throws Exception {
         Inputs in = Inputs.load(scenarioFile, output.footprint);
         List<BankEntry> entries = BankFileReader.read(bankFile, Inputs.display(bankFile), in.catalog());
         BankEvaluator evaluator = new BankEvaluator(in.scenario(), in.footprint());
         Evaluation e = evaluator.evaluate(new CapacitorBank(entries));
-        return Results.emit("check", in, evaluator, e, java.util.Optional.empty(), output,
+        RunExtras mc = monteCarlo.run(evaluator, e.bank(), in.scenario(), output.quiet || output.json,
+                spec.commandLine().getErr());
+        return Results.emit("check", in, output.footprint, evaluator, e, java.util.Optional.empty(), mc, output,
                 spec.commandLine().getOut(), spec.commandLine().getErr());
     }
 }

@@ -21,7 +21,8 @@ import java.nio.charset.StandardCharsets;
             "",
             "Caution: results come from a lumped model, not a measurement. Verify every design on",
             "hardware, and respect part ratings (voltage, temperature, ripple current) and local codes."},
-        subcommands = {SolveCommand.class, CheckCommand.class, CommandLine.HelpCommand.class},
+        subcommands = {SolveCommand.class, CheckCommand.class, TrimCommand.class, CompareCommand.class,
+            FrontierCommand.class, CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {
             "0:success; the bank meets the spec",

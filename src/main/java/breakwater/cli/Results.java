@@ -35,7 +35,15 @@ final class Results {
     static int emit(String mode, Inputs in, BankEvaluator evaluator, Evaluation e, Optional<SearchResult> search,
                     List<ReportModel.Section> extraSections, OutputOptions output, PrintWriter out, PrintWriter err)
             throws IOException {
-        ObjectNode summary = SummaryJson.of(mode, in.scenario(), output.footprint, e);
+        return emit(mode, in, output.footprint, evaluator, e, search, RunExtras.of(extraSections, s -> { }, ""),
+                output, out, err);
+    }
+
+    /** As above, with what the mode adds; {@code footprintName} names the footprint of {@code e}. */
+    static int emit(String mode, Inputs in, String footprintName, BankEvaluator evaluator, Evaluation e,
+                    Optional<SearchResult> search, RunExtras extras, OutputOptions output, PrintWriter out,
+                    PrintWriter err) throws IOException {
+        ObjectNode summary = SummaryJson.of(mode, in.scenario(), footprintName, e);
         boolean meets = Verdicts.meetsSpec(in.scenario(), e);
         summary.put("meets_spec", meets);
         search.ifPresent(r -> {
@@ -46,16 +54,24 @@ final class Results {
             s.put("evaluations", r.evaluations());
             s.put("stopped_early", r.stoppedEarly());
         });
+        extras.summary().accept(summary);
         if (output.json) {
             StringWriter sw = new StringWriter();
             SummaryJson.write(summary, sw);
             out.print(sw);
         } else if (!output.quiet) {
-            out.print(ConsoleReport.render(in.scenario(), output.footprint, e));
+            out.print(ConsoleReport.render(in.scenario(), footprintName, e));
             search.ifPresent(r -> out.printf(Locale.ROOT, "%nSearch     %d banks evaluated in %.1f s by %d solver%s, seed %d%s%n",
                     r.evaluations(), r.seconds(), r.solvers(), r.solvers() == 1 ? "" : "s", r.seed(),
                     r.stoppedEarly() ? " (stopped by the user)" : ""));
+            if (!extras.console().isEmpty()) {
+                out.println();
+                out.print(extras.console().endsWith("\n") ? extras.console() : extras.console() + "\n");
+            }
             out.println();
+            if (!extras.modeVerdict().isEmpty()) {
+                out.println(extras.modeVerdict());
+            }
             out.println(Verdicts.describe(in.scenario(), e));
         }
         if (output.outDir().isPresent()) {
@@ -69,8 +85,8 @@ final class Results {
             Waveform overshoot = evaluator.overshootWaveform(e);
             dir.write("worst-case.csv", w -> CsvOutputs.writeWorstCase(droop, w));
             written.add("worst-case.csv");
-            ReportModel model = ReportBuilder.build(new ReportBuilder.Run(mode, in.scenario(), output.footprint, e, droop,
-                    overshoot, search, extraSections));
+            ReportModel model = extras.model().apply(ReportBuilder.build(new ReportBuilder.Run(mode, in.scenario(),
+                    footprintName, e, droop, overshoot, search, extras.sections())));
             dir.write("impedance.svg", w -> w.write(Charts.impedanceChart(model.impedance())));
             written.add("impedance.svg");
             dir.write("worst-case.svg", w -> w.write(Charts.worstCaseChart(model.worstCase())));
@@ -85,6 +101,6 @@ final class Results {
         }
         out.flush();
         err.flush();
-        return meets ? ExitCodes.OK : ExitCodes.SPEC_NOT_MET;
+        return meets && extras.modeMet() ? ExitCodes.OK : ExitCodes.SPEC_NOT_MET;
     }
 }

@@ -55,6 +55,9 @@ final class SolveCommand implements Callable<Integer> {
     @Mixin
     SearchOptions search;
 
+    @Mixin
+    MonteCarloOptions monteCarlo;
+
     @Override
     public Integer call() throws Exception {
         Inputs in = Inputs.load(scenarioFile, output.footprint);
@@ -76,8 +79,9 @@ final class SolveCommand implements Callable<Integer> {
             SearchResult result = Searches.runWithProgress(bankSearch, settings, CapacitorBank.EMPTY, err, output.quiet,
                     evaluator);
             Evaluation e = evaluator.evaluate(result.bank());
-            return Results.emit("solve", in, evaluator, e, java.util.Optional.of(result), output,
-                    spec.commandLine().getOut(), err);
+            RunExtras mc = monteCarlo.run(evaluator, e.bank(), in.scenario(), output.quiet, err);
+            return Results.emit("solve", in, output.footprint, evaluator, e, java.util.Optional.of(result), mc,
+                    output, spec.commandLine().getOut(), err);
         }
     }
 }

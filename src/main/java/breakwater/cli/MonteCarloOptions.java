@@ -1,0 +1,88 @@
+package breakwater.cli;
+
+import breakwater.design.BankEvaluator;
+import breakwater.design.CapacitorBank;
+import breakwater.design.MonteCarlo;
+import breakwater.report.MonteCarloReport;
+import breakwater.scenario.Scenario;
+import picocli.CommandLine;
+import picocli.CommandLine.Option;
+
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Locale;
+
+/** {@code --monte-carlo N}, {@code --mc-seed}, {@code --spread}: part-to-part spread of the chosen bank. */
+final class MonteCarloOptions {
+    @Option(names = "--monte-carlo", paramLabel = "N",
+            description = {"After the bank is chosen, judge N variants of it with parts drawn within their "
+                    + "tolerances (uniform): capacitance within the catalog's tolerance column, else by "
+                    + "dielectric C0G 5 %%, X7R 10 %%, X5R 20 %%, polymer/tantalum/other 20 %%; ESR and ESL within "
+                    + "--spread. All parts of one type move together (one reel: the pessimistic choice). "
+                    + "Reports the worst droop and overshoot distribution (p50, p95, p99, max) and the yield."})
+    int samples;
+
+    @Option(names = "--mc-seed", paramLabel = "N",
+            description = "Seed of the Monte Carlo draws (default: [solver] seed, else 1); same seed, same samples.")
+    Long seed;
+
+    @Option(names = "--spread", paramLabel = "PCT", converter = PercentConverter.class, defaultValue = "20",
+            description = "ESR and ESL spread for --monte-carlo, in percent either side (default: ${DEFAULT-VALUE} %%).")
+    double spreadFraction;
+
+    boolean enabled() {
+        if (samples < 0) {
+            throw new UsageException("--monte-carlo must be >= 1 (number of samples), got " + samples);
+        }
+        return samples > 0;
+    }
+
+    /**
+     * Runs the samples on {@code bank} against {@code evaluator}'s limits (pass the rail's own evaluator:
+     * the yield is against the spec), or nothing when --monte-carlo is absent.
+     */
+    RunExtras run(BankEvaluator evaluator, CapacitorBank bank, Scenario scenario, boolean quiet, PrintWriter err) {
+        if (!enabled()) {
+            return RunExtras.NONE;
+        }
+        long s = seed != null ? seed : scenario.solver().seed();
+        MonteCarlo.Settings settings = new MonteCarlo.Settings(samples, s, spreadFraction);
+        if (!quiet) {
+            err.printf(Locale.ROOT, "breakwater: Monte Carlo, %d samples on %d cores, seed %d%n", samples,
+                    Runtime.getRuntime().availableProcessors(), s);
+            err.flush();
+        }
+        long t0 = System.nanoTime();
+        MonteCarlo.Result r;
+        try {
+            r = MonteCarlo.run(evaluator, bank, settings);
+        } catch (IllegalArgumentException e) {
+            throw new UsageException("--monte-carlo: " + e.getMessage());
+        }
+        double seconds = (System.nanoTime() - t0) / 1e9;
+        return RunExtras.of(List.of(MonteCarloReport.section(r, seconds)),
+                json -> MonteCarloReport.summary(json, r, seconds), MonteCarloReport.console(r, seconds));
+    }
+
+    /** "20", "20%", "20 %" are all 20 %. */
+    static final class PercentConverter implements CommandLine.ITypeConverter<Double> {
+        @Override
+        public Double convert(String value) {
+            String v = value.strip();
+            if (v.endsWith("%")) {
+                v = v.substring(0, v.length() - 1).strip();
+            }
+            double pct;
+            try {
+                pct = Double.parseDouble(v);
+            } catch (NumberFormatException e) {
+                throw new CommandLine.TypeConversionException("'" + value + "' is not a percentage; write e.g. 20 or 20%");
+            }
+            if (!(pct >= 0 && pct < 100)) {
+                throw new CommandLine.TypeConversionException("a spread must be at least 0 % and below 100 %, got '"
+                        + value + "'");
+            }
+            return pct / 100;
+        }
+    }
+}

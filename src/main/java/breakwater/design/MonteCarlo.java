@@ -1,0 +1,248 @@
+package breakwater.design;
+
+import breakwater.catalog.BankEntry;
+import breakwater.catalog.Part;
+import breakwater.network.NetworkBuilder;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+import java.util.Objects;
+import java.util.SplittableRandom;
+import java.util.stream.IntStream;
+
+/**
+ * Part-to-part spread of a chosen bank: the exact worst case over many banks whose parts are drawn
+ * within their tolerances.
+ *
+ * <p>In each sample every part TYPE of the bank gets one draw, shared by all its placed parts (a batch
+ * from one reel moves together; this is the pessimistic choice, because n independent parts would
+ * average out): capacitance × (1 + t·u₁), ESR × (1 + s·u₂), ESL × (1 + s·u₃), with u₁, u₂, u₃ uniform
+ * on [−1, 1], t the part's capacitance tolerance ({@link ToleranceRule}) and s the ESR/ESL spread. The
+ * mounting inductance belongs to the layout and is not drawn. Each sample is then judged with the
+ * evaluator's exact worst case ({@link BankEvaluator#worstCaseFigures}).
+ *
+ * <p>Reproducible: sample k uses its own generator, seeded with the k-th number of a
+ * {@link SplittableRandom} seeded with {@code seed}, and results are stored by index, so the outcome
+ * does not depend on how many threads run the samples. Because the draws are multiplied by the
+ * tolerances, the same seed with wider tolerances moves every sample further along the same direction.
+ */
+public final class MonteCarlo {
+    /** Default capacitance tolerance by dielectric when the catalog gives none (common practice). */
+    public static final double C0G_TOLERANCE = 0.05;
+    public static final double X7R_TOLERANCE = 0.10;
+    public static final double X5R_TOLERANCE = 0.20;
+    /** Polymer, tantalum and anything else. */
+    public static final double OTHER_TOLERANCE = 0.20;
+    /** ESR and ESL spread when none is given: ±20 %. */
+    public static final double DEFAULT_SPREAD = 0.20;
+
+    private MonteCarlo() {
+    }
+
+    /** The capacitance tolerance used for a part (0.1 = ±10 %). */
+    @FunctionalInterface
+    public interface ToleranceRule {
+        double capacitanceTolerance(Part part);
+    }
+
+    /** The catalog's {@code tolerance} column, else the default for the part's dielectric. */
+    public static final ToleranceRule CATALOG_OR_DIELECTRIC = p -> p.tolerance().orElse(dielectricDefault(p.dielectric()));
+
+    /** Where a part's capacitance tolerance comes from, in words: "catalog" or "default for X7R". */
+    public static String toleranceSource(Part p) {
+        return p.tolerance().isPresent() ? "catalog"
+                : "default for " + (p.dielectric().isEmpty() ? "unknown dielectric" : p.dielectric());
+    }
+
+    /** C0G/NP0 5 %, X7R 10 %, X5R 20 %, polymer, tantalum and any other 20 % (common practice). */
+    public static double dielectricDefault(String dielectric) {
+        String d = dielectric.strip().toUpperCase(Locale.ROOT);
+        return switch (d) {
+            case "C0G", "NP0", "COG", "NPO" -> C0G_TOLERANCE;
+            case "X7R", "X7S", "X8R" -> X7R_TOLERANCE;
+            case "X5R", "X6S" -> X5R_TOLERANCE;
+            default -> OTHER_TOLERANCE;
+        };
+    }
+
+    /**
+     * @param samples        number of banks drawn, &ge; 1
+     * @param seed           seed of the whole run
+     * @param spreadFraction ESR and ESL spread, in [0, 1) (0.2 = ±20 %)
+     * @param tolerance      capacitance tolerance per part
+     */
+    public record Settings(int samples, long seed, double spreadFraction, ToleranceRule tolerance) {
+        public Settings {
+            Objects.requireNonNull(tolerance, "tolerance");
+            if (samples < 1) {
+                throw new IllegalArgumentException("Monte Carlo needs at least 1 sample, got " + samples);
+            }
+            if (!(spreadFraction >= 0 && spreadFraction < 1)) {
+                throw new IllegalArgumentException("ESR/ESL spread must be in 0 .. 100 % (exclusive), got "
+                        + spreadFraction);
+            }
+        }
+
+        public Settings(int samples, long seed, double spreadFraction) {
+            this(samples, seed, spreadFraction, CATALOG_OR_DIELECTRIC);
+        }
+    }
+
+    /** How one part type of the bank was varied. */
+    public record PartSpread(String part, int count, double capacitanceTolerance, String toleranceSource,
+                             double spreadFraction) {
+    }
+
+    /**
+     * Nearest-rank percentiles of a sample and its maximum. The nearest-rank p-th percentile of n values
+     * sorted ascending x₁ ≤ … ≤ xₙ is x_⌈p·n/100⌉ (1-based), the smallest value with at least p % of the
+     * sample at or below it; it is always one of the sample values (no interpolation).
+     */
+    public record Distribution(double p50, double p95, double p99, double max) {
+        public static Distribution of(double[] values) {
+            double[] s = values.clone();
+            Arrays.sort(s);
+            return new Distribution(nearestRank(s, 50), nearestRank(s, 95), nearestRank(s, 99), s[s.length - 1]);
+        }
+    }
+
+    /** Nearest-rank percentile (see {@link Distribution}) of values already sorted ascending; 0 &lt; p &le; 100. */
+    public static double nearestRank(double[] sortedAscending, double percent) {
+        if (sortedAscending.length == 0 || !(percent > 0 && percent <= 100)) {
+            throw new IllegalArgumentException("need values and 0 < p <= 100");
+        }
+        int rank = (int) Math.ceil(percent / 100.0 * sortedAscending.length - 1e-9);
+        return sortedAscending[Math.max(1, Math.min(sortedAscending.length, rank)) - 1];
+    }
+
+    /**
+     * What the samples gave.
+     *
+     * @param settings    how they were drawn
+     * @param parts       the spread of each part type, in bank order
+     * @param nominal     the bank's own worst case
+     * @param droopV      worst droop of each sample, by sample index
+     * @param overshootV  worst overshoot of each sample, by sample index
+     * @param passing     samples whose V_min and V_max stay inside the evaluator's limits
+     */
+    public record Result(Settings settings, List<PartSpread> parts, WorstCaseFigures nominal, double[] droopV,
+                         double[] overshootV, int passing) {
+        public Result {
+            parts = List.copyOf(parts);
+            droopV = droopV.clone();
+            overshootV = overshootV.clone();
+            if (droopV.length != settings.samples() || overshootV.length != settings.samples()) {
+                throw new IllegalArgumentException("one droop and one overshoot per sample expected");
+            }
+        }
+
+        @Override
+        public double[] droopV() {
+            return droopV.clone();
+        }
+
+        @Override
+        public double[] overshootV() {
+            return overshootV.clone();
+        }
+
+        /** Share of samples inside the limits, 0 .. 1. */
+        public double yieldFraction() {
+            return (double) passing / settings.samples();
+        }
+
+        public Distribution droop() {
+            return Distribution.of(droopV);
+        }
+
+        public Distribution overshoot() {
+            return Distribution.of(overshootV);
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Result r && r.settings.equals(settings) && r.parts.equals(parts)
+                    && r.nominal.equals(nominal) && Arrays.equals(r.droopV, droopV)
+                    && Arrays.equals(r.overshootV, overshootV) && r.passing == passing;
+        }
+
+        @Override
+        public int hashCode() {
+            return Arrays.hashCode(droopV) * 31 + Arrays.hashCode(overshootV) + passing;
+        }
+
+        @Override
+        public String toString() {
+            return "MonteCarlo.Result[" + settings.samples() + " samples, yield " + yieldFraction() + "]";
+        }
+    }
+
+    /**
+     * Draws {@code settings.samples()} variants of {@code bank} and judges each with {@code evaluator}
+     * (its limits decide the yield), in parallel on the common fork-join pool.
+     *
+     * @throws IllegalArgumentException when a part's capacitance tolerance is not in [0, 1)
+     */
+    public static Result run(BankEvaluator evaluator, CapacitorBank bank, Settings settings) {
+        List<BankEntry> entries = bank.entries();
+        int n = entries.size();
+        double[] tol = new double[n];
+        List<PartSpread> spreads = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            Part p = entries.get(i).part();
+            tol[i] = settings.tolerance().capacitanceTolerance(p);
+            if (!(tol[i] >= 0 && tol[i] < 1)) {
+                throw new IllegalArgumentException(p.name() + ": capacitance tolerance must be in 0 .. 100 % "
+                        + "(exclusive) for Monte Carlo, got " + tol[i]);
+            }
+            spreads.add(new PartSpread(p.name(), entries.get(i).count(), tol[i], toleranceSource(p),
+                    settings.spreadFraction()));
+        }
+        long[] seeds = new long[settings.samples()];
+        SplittableRandom root = new SplittableRandom(settings.seed());
+        for (int k = 0; k < seeds.length; k++) {
+            seeds[k] = root.nextLong();
+        }
+        double[] droop = new double[seeds.length];
+        double[] over = new double[seeds.length];
+        boolean[] pass = new boolean[seeds.length];
+        IntStream.range(0, seeds.length).parallel().forEach(k -> {
+            List<BankEntry> drawn = sample(entries, tol, settings.spreadFraction(), seeds[k]);
+            WorstCaseFigures f = evaluator.worstCaseFigures(
+                    NetworkBuilder.build(evaluator.scenario(), drawn, evaluator.footprint()));
+            droop[k] = f.droopV();
+            over[k] = f.overshootV();
+            pass[k] = f.passes();
+        });
+        int passing = 0;
+        for (boolean b : pass) {
+            passing += b ? 1 : 0;
+        }
+        WorstCaseFigures nominal = evaluator.worstCaseFigures(
+                NetworkBuilder.build(evaluator.scenario(), entries, evaluator.footprint()));
+        return new Result(settings, spreads, nominal, droop, over, passing);
+    }
+
+    /** One sample: every part type drawn once from its own generator seeded with {@code sampleSeed}. */
+    static List<BankEntry> sample(List<BankEntry> entries, double[] tolerance, double spread, long sampleSeed) {
+        SplittableRandom r = new SplittableRandom(sampleSeed);
+        List<BankEntry> out = new ArrayList<>(entries.size());
+        for (int i = 0; i < entries.size(); i++) {
+            BankEntry e = entries.get(i);
+            Part p = e.part();
+            // three draws per type, always in this order, whatever the tolerances: widening a tolerance
+            // scales the same draws
+            double uC = r.nextDouble(-1.0, 1.0);
+            double uR = r.nextDouble(-1.0, 1.0);
+            double uL = r.nextDouble(-1.0, 1.0);
+            Part drawn = new Part(p.name(), p.description(), p.caseCode(), p.dielectric(),
+                    p.capacitanceF() * (1 + tolerance[i] * uC), p.esrOhms() * (1 + spread * uR),
+                    p.eslH() * (1 + spread * uL), p.mountInductanceH(), p.unitCost(), p.voltageRatingV(),
+                    p.toleranceFraction(), p.dcBiasRetention(), p.maxCount());
+            out.add(new BankEntry(drawn, e.count()));
+        }
+        return out;
+    }
+}

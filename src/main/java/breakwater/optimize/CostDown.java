@@ -1,0 +1,108 @@
+package breakwater.optimize;
+
+import breakwater.catalog.BankEntry;
+import breakwater.catalog.Part;
+import breakwater.design.BankEvaluator;
+import breakwater.design.CapacitorBank;
+import breakwater.design.Evaluation;
+import breakwater.design.Limits;
+import breakwater.scenario.Scenario;
+
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * Cost-down of an existing bank: the cheapest bank that keeps what the existing one achieves. The search
+ * starts from the existing bank; its result is taken only when a full evaluation finds it strictly
+ * cheaper and inside the judge's limits, so a cost-down never returns a bank worse than the one it
+ * started from by its own judge.
+ */
+public final class CostDown {
+    private CostDown() {
+    }
+
+    /** What the cheaper bank must keep. */
+    public enum Keep {
+        /** Worst droop and worst overshoot no worse than the existing bank's (and inside the spec). */
+        MARGIN,
+        /** Merely inside the spec. */
+        SPEC
+    }
+
+    /** A change of one part's count; 0 for a part not placed. */
+    public record Change(String part, int from, int to) {
+    }
+
+    /**
+     * The outcome.
+     *
+     * @param existing    the bank it started from
+     * @param chosen      the bank returned: the search's, or the existing one unchanged
+     * @param unchanged   whether the existing bank was kept
+     * @param reason      why it was kept ("" when it was not)
+     */
+    public record Decision(CapacitorBank existing, CapacitorBank chosen, boolean unchanged, String reason) {
+    }
+
+    /**
+     * The judge for {@code keep}: the rail's own for {@link Keep#SPEC}; for {@link Keep#MARGIN} the band
+     * narrowed to the existing bank's worst droop below and worst overshoot above the operating point
+     * (never wider than the spec).
+     */
+    public static BankEvaluator judge(BankEvaluator spec, Evaluation existing, Keep keep) {
+        return switch (keep) {
+            case SPEC -> spec;
+            case MARGIN -> spec.withLimits(Limits.around(spec.operatingPointV(), existing.figures().droopV(),
+                    existing.figures().overshootV()));
+        };
+    }
+
+    /** The search's largest counts, raised where needed so the existing bank itself can be represented. */
+    public static int[] maxCounts(List<Part> candidates, Scenario scenario, CapacitorBank existing) {
+        int[] max = MaxCounts.of(candidates, scenario);
+        int[] have = existing.countsFor(candidates);
+        for (int i = 0; i < max.length; i++) {
+            max[i] = Math.max(max[i], have[i]);
+        }
+        return max;
+    }
+
+    /** Takes {@code found} only when it is strictly cheaper than {@code existing} and meets {@code judge}. */
+    public static Decision decide(BankEvaluator judge, CapacitorBank existing, CapacitorBank found) {
+        Evaluation old = judge.evaluate(existing);
+        Evaluation e = judge.evaluate(found);
+        if (!meets(judge, e)) {
+            return new Decision(existing, existing, true, "the search found no bank that keeps "
+                    + (meets(judge, old) ? "what the existing bank achieves" : "the limits") + " for less");
+        }
+        if (!(e.cost().total() < old.cost().total())) {
+            return new Decision(existing, existing, true, "the search found no strictly cheaper bank within the limits");
+        }
+        return new Decision(existing, found, false, "");
+    }
+
+    /** Inside the judge's limits, within the board limits, and under the target when the scenario asks. */
+    public static boolean meets(BankEvaluator judge, Evaluation e) {
+        return e.figures().passes() && e.fitsBoard() && (!judge.scenario().requireTarget() || e.impedance().underTarget());
+    }
+
+    /** Per part, old count to new count, for every part whose count differs (existing order, then new parts). */
+    public static List<Change> changes(CapacitorBank from, CapacitorBank to) {
+        Set<String> names = new LinkedHashSet<>();
+        for (BankEntry e : from.entries()) {
+            names.add(e.part().name());
+        }
+        for (BankEntry e : to.entries()) {
+            names.add(e.part().name());
+        }
+        List<Change> out = new ArrayList<>();
+        for (String n : names) {
+            if (from.count(n) != to.count(n)) {
+                out.add(new Change(n, from.count(n), to.count(n)));
+            }
+        }
+        return out;
+    }
+}

@@ -1,0 +1,247 @@
+package breakwater.cli;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import static breakwater.cli.CliTest.run;
+import static org.assertj.core.api.Assertions.assertThat;
+
+/**
+ * trim, compare, frontier and --monte-carlo in-process on a small invented rail (four parts, at most five
+ * of each), move-limited with one solver so every run is short and reproducible.
+ */
+class ModesCliTest {
+    static final Path RAIL = CliTest.ROOT.resolve("src/test/resources/breakwater/cli/small-rail");
+    static final Path SMALL = RAIL.resolve("small.toml");
+    static final Path BARE = RAIL.resolve("nofootprint.toml");
+    static final Path EXISTING = RAIL.resolve("existing.bank.csv");
+    static final String[] FAST = {"--moves", "300", "--solvers", "1", "--seed", "3"};
+
+    static JsonNode at(JsonNode root, String dotted) {
+        JsonNode n = root;
+        for (String part : dotted.split("\\.")) {
+            n = n.path(part);
+        }
+        return n;
+    }
+
+    static void assertKeys(JsonNode root, String... keys) {
+        for (String k : keys) {
+            assertThat(at(root, k).isMissingNode()).as(k).isFalse();
+        }
+    }
+
+    static String[] args(String... first) {
+        String[] out = new String[first.length + FAST.length];
+        System.arraycopy(first, 0, out, 0, first.length);
+        System.arraycopy(FAST, 0, out, first.length, FAST.length);
+        return out;
+    }
+
+    static JsonNode json(Path file) throws IOException {
+        return new ObjectMapper().readTree(file.toFile());
+    }
+
+    static void assertFiles(Path out) {
+        for (String f : new String[] {"bom.csv", "impedance.csv", "worst-case.csv", "summary.json", "report.html",
+            "impedance.svg", "worst-case.svg"}) {
+            assertThat(out.resolve(f)).isRegularFile();
+        }
+    }
+
+    @Test
+    void helpListsTheNewCommands() {
+        CliTest.Run r = run("--help");
+        assertThat(r.out()).contains("trim", "compare", "frontier");
+        assertThat(run("check", "--help").out()).contains("--monte-carlo", "C0G 5 %", "X7R 10 %", "X5R 20 %",
+                "--spread", "--mc-seed");
+    }
+
+    @Test
+    void trimWritesSavingsChangesAndNeverLosesMargin(@TempDir Path dir) throws IOException {
+        Path out = dir.resolve("trim");
+        CliTest.Run r = run(args("trim", SMALL.toString(), "--out", out.toString()));
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("Savings", "per 1,000 boards", "->", "MEETS SPEC",
+                "A model is not a measurement: verify the design on hardware.");
+        assertFiles(out);
+        JsonNode s = json(out.resolve("summary.json"));
+        assertKeys(s, "trim.existing.cost_total", "trim.existing.worst_case.droop_v",
+                "trim.existing.worst_case.overshoot_v", "trim.savings", "trim.savings_per_1000", "trim.keep",
+                "trim.changes");
+        assertThat(at(s, "trim.keep").asText()).isEqualTo("margin");
+        assertThat(at(s, "trim.savings_per_1000").asDouble()).isEqualTo(1000 * at(s, "trim.savings").asDouble());
+        // the result costs no more and keeps the existing bank's worst droop and overshoot
+        assertThat(at(s, "cost_total").asDouble()).isLessThanOrEqualTo(at(s, "trim.existing.cost_total").asDouble());
+        assertThat(at(s, "worst_case.droop_v").asDouble())
+                .isLessThanOrEqualTo(at(s, "trim.existing.worst_case.droop_v").asDouble());
+        assertThat(at(s, "worst_case.overshoot_v").asDouble())
+                .isLessThanOrEqualTo(at(s, "trim.existing.worst_case.overshoot_v").asDouble());
+        // savings = old cost - new cost (the same two numbers, subtracted once)
+        assertThat(at(s, "trim.savings").asDouble()).isEqualTo(
+                at(s, "trim.existing.cost_total").asDouble() - at(s, "cost_total").asDouble());
+        for (JsonNode ch : at(s, "trim.changes")) {
+            assertKeys(ch, "part", "from", "to");
+            assertThat(ch.path("from").asInt()).isNotEqualTo(ch.path("to").asInt());
+        }
+        // the report overlays old and new banks
+        assertThat(Files.readString(out.resolve("report.html"))).contains("existing bank", "Cost-down");
+    }
+
+    @Test
+    void trimWithKeepSpecAndAnExplicitBank() throws IOException {
+        CliTest.Run r = run(args("trim", SMALL.toString(), "--bank", EXISTING.toString(), "--keep", "spec", "--json"));
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        JsonNode s = new ObjectMapper().readTree(r.out());
+        assertThat(at(s, "trim.keep").asText()).isEqualTo("spec");
+        assertThat(at(s, "worst_case.passes").asBoolean()).isTrue();
+        assertThat(at(s, "trim.savings").asDouble()).isGreaterThanOrEqualTo(0.0);
+    }
+
+    @Test
+    void trimWithoutAnyBankIsAUsageError() {
+        CliTest.Run r = run(args("trim", BARE.toString()));
+        assertThat(r.code()).isEqualTo(ExitCodes.USAGE);
+        assertThat(r.err()).contains("--bank", "[existing]").doesNotContain("Exception");
+    }
+
+    @Test
+    void trimOfABankThatAlreadyFailsKeepsItWhenNothingCheaperFits(@TempDir Path dir) throws IOException {
+        // one 100 nF part cannot hold this rail and nothing cheaper than one part can: unchanged, exit 1
+        Path bank = dir.resolve("one.csv");
+        Files.writeString(bank, "part,count\nhf-100n,1\n");
+        CliTest.Run r = run(args("trim", SMALL.toString(), "--bank", bank.toString(), "--json"));
+        JsonNode s = new ObjectMapper().readTree(r.out());
+        assertThat(at(s, "trim.unchanged").asBoolean()).isTrue();
+        assertThat(at(s, "trim.savings").asDouble()).isEqualTo(0.0);
+        assertThat(at(s, "trim.changes").size()).isZero();
+        assertThat(r.code()).isEqualTo(ExitCodes.SPEC_NOT_MET);
+    }
+
+    @Test
+    void monteCarloOnCheckAddsTheDistributionAndIsReproducible(@TempDir Path dir) throws IOException {
+        Path out = dir.resolve("mc");
+        CliTest.Run r = run("check", SMALL.toString(), "--bank", EXISTING.toString(), "--monte-carlo", "60",
+                "--mc-seed", "5", "--spread", "15%", "--out", out.toString());
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("Yield", "p95", "each part type moves as one batch");
+        JsonNode s = json(out.resolve("summary.json"));
+        assertKeys(s, "monte_carlo.samples", "monte_carlo.seed", "monte_carlo.spread", "monte_carlo.yield",
+                "monte_carlo.droop_v.p50", "monte_carlo.droop_v.p95", "monte_carlo.droop_v.p99",
+                "monte_carlo.droop_v.max", "monte_carlo.overshoot_v.p50", "monte_carlo.overshoot_v.p95",
+                "monte_carlo.overshoot_v.p99", "monte_carlo.overshoot_v.max");
+        assertThat(at(s, "monte_carlo.samples").asInt()).isEqualTo(60);
+        assertThat(at(s, "monte_carlo.seed").asLong()).isEqualTo(5);
+        assertThat(at(s, "monte_carlo.spread").asDouble()).isEqualTo(0.15);
+        assertThat(at(s, "monte_carlo.yield").asDouble()).isBetween(0.0, 1.0);
+        double p50 = at(s, "monte_carlo.droop_v.p50").asDouble();
+        assertThat(p50).isLessThanOrEqualTo(at(s, "monte_carlo.droop_v.p95").asDouble());
+        assertThat(at(s, "monte_carlo.droop_v.p99").asDouble()).isLessThanOrEqualTo(at(s, "monte_carlo.droop_v.max").asDouble());
+        assertThat(Files.readString(out.resolve("report.html"))).contains("Monte Carlo", "allowed droop");
+
+        CliTest.Run again = run("check", SMALL.toString(), "--bank", EXISTING.toString(), "--monte-carlo", "60",
+                "--mc-seed", "5", "--spread", "15", "--json");
+        assertThat(at(new ObjectMapper().readTree(again.out()), "monte_carlo.droop_v.p50").asDouble()).isEqualTo(p50);
+    }
+
+    @Test
+    void monteCarloOnSolveAndTrim() throws IOException {
+        CliTest.Run solve = run(args("solve", SMALL.toString(), "--monte-carlo", "20", "--json"));
+        assertThat(solve.code()).as(solve.err()).isEqualTo(ExitCodes.OK);
+        assertThat(at(new ObjectMapper().readTree(solve.out()), "monte_carlo.samples").asInt()).isEqualTo(20);
+        CliTest.Run trim = run(args("trim", SMALL.toString(), "--monte-carlo", "20", "--json"));
+        JsonNode t = new ObjectMapper().readTree(trim.out());
+        assertKeys(t, "monte_carlo.yield", "trim.savings");
+    }
+
+    @Test
+    void badMonteCarloOptionsAreUsageErrors() {
+        assertThat(run("check", SMALL.toString(), "--bank", EXISTING.toString(), "--monte-carlo", "-3").code())
+                .isEqualTo(ExitCodes.USAGE);
+        assertThat(run("check", SMALL.toString(), "--bank", EXISTING.toString(), "--monte-carlo", "10",
+                "--spread", "150%").code()).isEqualTo(ExitCodes.USAGE);
+    }
+
+    @Test
+    void compareSolvesEachFootprintAndListsThemAll(@TempDir Path dir) throws IOException {
+        Path out = dir.resolve("cmp");
+        CliTest.Run r = run(args("compare", SMALL.toString(), "--out", out.toString()));
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("long-trace", "via-in-pad", "split");
+        assertFiles(out);
+        JsonNode s = json(out.resolve("summary.json"));
+        assertThat(at(s, "footprints").size()).isEqualTo(2);
+        assertThat(at(s, "footprints").get(0).path("name").asText()).isEqualTo("long-trace");
+        assertThat(at(s, "footprints").get(1).path("name").asText()).isEqualTo("via-in-pad");
+        for (JsonNode f : at(s, "footprints")) {
+            assertKeys(f, "name", "cost_total", "total_parts", "bank", "worst_case.droop_v", "worst_case.overshoot_v",
+                    "worst_case.passes", "impedance.peak_ohm", "impedance.ripple_db");
+            assertKeys(f.path("bank").get(0), "part", "count");
+        }
+        String html = Files.readString(out.resolve("report.html"));
+        assertThat(html).contains("Footprints compared", "long-trace", "via-in-pad");
+    }
+
+    @Test
+    void compareWithABankAndChosenFootprints() throws IOException {
+        CliTest.Run r = run("compare", SMALL.toString(), "--bank", EXISTING.toString(), "--footprints",
+                "via-in-pad,catalog", "--json");
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        JsonNode s = new ObjectMapper().readTree(r.out());
+        assertThat(at(s, "footprints").get(1).path("name").asText()).isEqualTo("catalog");
+        // the same bank under each: same cost, lower mounting inductance gives a different worst case
+        assertThat(at(s, "footprints").get(0).path("cost_total").asDouble())
+                .isEqualTo(at(s, "footprints").get(1).path("cost_total").asDouble());
+        assertThat(at(s, "footprints").get(0).path("worst_case").path("droop_v").asDouble())
+                .isNotEqualTo(at(s, "footprints").get(1).path("worst_case").path("droop_v").asDouble());
+    }
+
+    @Test
+    void compareWithoutFootprintsOrWithAnUnknownOneIsAUsageError() {
+        CliTest.Run none = run(args("compare", BARE.toString()));
+        assertThat(none.code()).isEqualTo(ExitCodes.USAGE);
+        assertThat(none.err()).contains("defines none", "[footprint.NAME]");
+        CliTest.Run typo = run(args("compare", SMALL.toString(), "--footprints", "via-in-pda"));
+        assertThat(typo.code()).isEqualTo(ExitCodes.USAGE);
+        assertThat(typo.err()).contains("via-in-pad");
+    }
+
+    @Test
+    void frontierIsMonotoneAndEndsAtTheSpec(@TempDir Path dir) throws IOException {
+        Path out = dir.resolve("fr");
+        CliTest.Run r = run(args("frontier", SMALL.toString(), "--points", "4", "--out", out.toString()));
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("Frontier", "split");
+        assertFiles(out);
+        JsonNode s = json(out.resolve("summary.json"));
+        JsonNode f = at(s, "frontier");
+        assertThat(f.size()).isEqualTo(4);
+        double previousLimit = 0;
+        double previousCost = Double.POSITIVE_INFINITY;
+        for (JsonNode p : f) {
+            assertKeys(p, "limit_v", "cost_total", "total_parts", "bank", "worst_case.droop_v",
+                    "worst_case.overshoot_v", "meets_limit");
+            assertThat(p.path("limit_v").asDouble()).isGreaterThan(previousLimit);
+            if (p.path("meets_limit").asBoolean()) {
+                assertThat(p.path("worst_case").path("droop_v").asDouble()).isLessThanOrEqualTo(p.path("limit_v").asDouble());
+                assertThat(p.path("cost_total").asDouble()).isLessThanOrEqualTo(previousCost);
+                previousCost = p.path("cost_total").asDouble();
+            }
+            previousLimit = p.path("limit_v").asDouble();
+        }
+        // the last limit is the spec's own; its bank is the one in the files
+        assertThat(f.get(3).path("cost_total").asDouble()).isEqualTo(at(s, "cost_total").asDouble());
+        assertThat(Files.readString(out.resolve("report.html"))).contains("Cost against worst excursion");
+    }
+
+    @Test
+    void frontierNeedsTwoPoints() {
+        assertThat(run(args("frontier", SMALL.toString(), "--points", "1")).code()).isEqualTo(ExitCodes.USAGE);
+    }
+}

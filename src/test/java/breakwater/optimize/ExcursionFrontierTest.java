@@ -1,0 +1,89 @@
+package breakwater.optimize;
+
+import breakwater.design.BankEvaluator;
+import breakwater.design.CandidateJudge;
+import breakwater.design.CapacitorBank;
+import org.junit.jupiter.api.Test;
+
+import java.time.Duration;
+import java.util.List;
+import java.util.Optional;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/** The cost–excursion frontier on the small catalog, move-limited. */
+class ExcursionFrontierTest {
+    static final SearchSettings EACH = new SearchSettings(Duration.ofMinutes(2), Duration.ofMinutes(2), 400, 2, 1);
+
+    static void assertMonotoneAndHonest(ExcursionFrontier.Result f) {
+        double previousLimit = 0;
+        double previousCost = Double.POSITIVE_INFINITY;
+        for (ExcursionFrontier.Point p : f.points()) {
+            assertThat(p.limitV()).isGreaterThan(previousLimit);
+            if (p.meetsLimit()) {
+                // a tighter limit never costs less: costs never rise as the limit loosens
+                assertThat(p.costTotal()).isLessThanOrEqualTo(previousCost);
+                previousCost = p.costTotal();
+                assertThat(p.evaluation().figures().droopV()).isLessThanOrEqualTo(p.limitV());
+                assertThat(p.evaluation().figures().overshootV()).isLessThanOrEqualTo(p.limitV());
+            }
+            previousLimit = p.limitV();
+        }
+    }
+
+    @Test
+    void frontierRunsFromTheTightestExcursionToTheSpecAndIsMonotone() throws Exception {
+        BankEvaluator spec = new BankEvaluator(BankSearchTest.scenario(0.05), Optional.empty());
+        ExcursionFrontier.Result f = ExcursionFrontier.run(spec, BankSearchTest.PARTS, BankSearchTest.MAX, EACH, 5,
+                (search, judge, s, start) -> search.run(s, start), () -> false);
+        assertThat(f.points()).hasSize(5);
+        assertThat(f.points().get(0).limitV()).isEqualTo(f.tightestV());
+        assertThat(f.points().get(4).limitV()).isEqualTo(f.allowedV());
+        // the spec allows V_op - V_low below and V_high - V_op above; the last limit is the larger
+        double op = spec.operatingPointV();
+        assertThat(f.allowedV()).isEqualTo(Math.max(op - spec.limits().lowerV(), spec.limits().upperV() - op));
+        assertThat(f.tightestV()).isLessThan(f.allowedV());
+        assertThat(f.points()).allSatisfy(p -> assertThat(p.meetsLimit()).isTrue());
+        assertMonotoneAndHonest(f);
+        // the tightest limit costs strictly more than the spec's on this rail, or the frontier shows nothing
+        assertThat(f.points().get(0).costTotal()).isGreaterThan(f.points().get(4).costTotal());
+    }
+
+    @Test
+    void aDearerResultForALooserLimitIsReplacedByTheTighterLimitsBank() throws Exception {
+        // an adversarial search: from the third search on it returns the dearest bank of the catalog
+        BankEvaluator spec = new BankEvaluator(BankSearchTest.scenario(0.05), Optional.empty());
+        CandidateJudge judge = new CandidateJudge(spec, BankSearchTest.PARTS);
+        int[] step = {0};
+        ExcursionFrontier.Result f = ExcursionFrontier.run(spec, BankSearchTest.PARTS, BankSearchTest.MAX, EACH, 4,
+                (search, j, s, start) -> {
+                    if (step[0]++ < 2) {
+                        return search.run(s, start);
+                    }
+                    int[] all = BankSearchTest.MAX.clone();
+                    return new SearchResult(CapacitorBank.of(BankSearchTest.PARTS, all), judge.judge(all), 1, 0, 1, 1,
+                            false);
+                }, () -> false);
+        assertMonotoneAndHonest(f);
+        List<ExcursionFrontier.Point> p = f.points();
+        for (int i = 1; i < p.size(); i++) {
+            assertThat(p.get(i).bank()).isEqualTo(p.get(0).bank());
+            assertThat(p.get(i).note()).contains("tighter");
+        }
+    }
+
+    @Test
+    void stoppedRunFillsTheRestWithoutSearching() throws Exception {
+        BankEvaluator spec = new BankEvaluator(BankSearchTest.scenario(0.05), Optional.empty());
+        int[] step = {0};
+        ExcursionFrontier.Result f = ExcursionFrontier.run(spec, BankSearchTest.PARTS, BankSearchTest.MAX, EACH, 3,
+                (search, j, s, start) -> {
+                    step[0]++;
+                    return search.run(s, start);
+                }, () -> step[0] >= 2);
+        assertThat(step[0]).isEqualTo(2);
+        assertThat(f.points().get(0).searched()).isTrue();
+        assertThat(f.points().get(2).searched()).isFalse();
+        assertMonotoneAndHonest(f);
+    }
+}
