@@ -107,7 +107,7 @@ final class CompareCommand implements Callable<Integer> {
             err.flush();
         }
         List<Row> rows = new ArrayList<>();
-        try (SearchSequence seq = new SearchSequence()) {
+        try (StopOnInterrupt seq = new StopOnInterrupt(err)) {
             for (String name : names) {
                 Optional<Footprint> fp = footprint(scenario, name);
                 BankEvaluator ev = new BankEvaluator(scenario, fp);

@@ -78,7 +78,7 @@ final class FrontierCommand implements Callable<Integer> {
                     Durations.describe(each.timeLimit()), each.seed());
             err.flush();
         }
-        try (SearchSequence seq = new SearchSequence()) {
+        try (StopOnInterrupt seq = new StopOnInterrupt(err)) {
             int[] step = {0};
             ExcursionFrontier.Result f = ExcursionFrontier.run(specJudge, candidates, max, each, points,
                     (bs, judge, settings, start) -> {

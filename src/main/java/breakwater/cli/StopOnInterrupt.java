@@ -7,17 +7,19 @@ import sun.misc.SignalHandler;
 import java.io.PrintWriter;
 
 /**
- * Ctrl-C during a search: the first one stops the solvers, and the command goes on to write the best bank
- * found; a second one ends the program at once. The signal is intercepted (rather than handled in a
- * shutdown hook) so that writing the results runs in a normal, living JVM.
+ * Ctrl-C during a search, or during several searches one after another (one per footprint, one per
+ * limit): the first one stops the running search and skips the rest, and the command goes on to write
+ * what it has; a second one ends the program at once. The signal is intercepted (rather than handled in
+ * a shutdown hook) so that writing the results runs in a normal, living JVM.
  */
 final class StopOnInterrupt implements AutoCloseable {
     private static final Signal INT = new Signal("INT");
 
     private final SignalHandler previous;
     private volatile boolean interrupted;
+    private volatile BankSearch current;
 
-    StopOnInterrupt(BankSearch search, PrintWriter err) {
+    StopOnInterrupt(PrintWriter err) {
         SignalHandler installed;
         try {
             installed = Signal.handle(INT, sig -> {
@@ -27,14 +29,31 @@ final class StopOnInterrupt implements AutoCloseable {
                     Runtime.getRuntime().halt(130);
                 }
                 interrupted = true;
-                err.println("breakwater: stopping the search (Ctrl-C again to quit at once); writing the best bank found ...");
+                err.println("breakwater: stopping the search (Ctrl-C again to quit at once); "
+                        + "writing the best bank found ...");
                 err.flush();
-                search.stop();
+                BankSearch s = current;
+                if (s != null) {
+                    s.stop();
+                }
             });
         } catch (IllegalArgumentException unsupported) {
             installed = null; // no SIGINT on this platform: Ctrl-C keeps its default meaning
         }
         previous = installed;
+    }
+
+    StopOnInterrupt(BankSearch search, PrintWriter err) {
+        this(err);
+        running(search);
+    }
+
+    /** The search now running; stopped at once if Ctrl-C came already. */
+    void running(BankSearch search) {
+        current = search;
+        if (interrupted) {
+            search.stop();
+        }
     }
 
     boolean interrupted() {

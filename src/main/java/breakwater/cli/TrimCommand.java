@@ -103,7 +103,7 @@ final class TrimCommand implements Callable<Integer> {
                     settings.moveLimit() > 0 ? ", move limit " + settings.moveLimit() : "");
             err.flush();
         }
-        try (StopOnInterrupt guard = new StopOnInterrupt(bankSearch)) {
+        try (StopOnInterrupt guard = new StopOnInterrupt(bankSearch, err)) {
             SearchResult result = Searches.runWithProgress(bankSearch, settings, existing, err, quiet, judge);
             CostDown.Decision d = CostDown.decide(judge, existing, result.bank());
             Evaluation e = specJudge.evaluate(d.chosen());

@@ -62,7 +62,7 @@ class ExcursionFrontierTest {
                     }
                     int[] all = BankSearchTest.MAX.clone();
                     return new SearchResult(CapacitorBank.of(BankSearchTest.PARTS, all), judge.judge(all), 1, 0, 1, 1,
-                            false);
+                            false, List.of());
                 }, () -> false);
         assertMonotoneAndHonest(f);
         List<ExcursionFrontier.Point> p = f.points();
