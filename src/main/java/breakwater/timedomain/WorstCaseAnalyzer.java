@@ -379,7 +379,7 @@ public final class WorstCaseAnalyzer {
     }
 
     /** Nodes per block of the weight computation: powers e^{pmΔ}, m &le; BLOCK, are tabulated per run. */
-    private static final int BLOCK = 32;
+    private static final int BLOCK = 128;
 
     /** Reusable buffers of one thread: grid, weights, step limits, dynamic-program scratch, mode tables. */
     private static final class Workspace {
