@@ -47,12 +47,16 @@ final class ChainDp {
      * @return the optimum Σ w_k u_k
      */
     static double solve(double[] w, double[] c, double[] u) {
-        return solve(w, 1.0, c, w.length, u, new Scratch());
+        double[] clipped = new double[c.length];
+        for (int k = 0; k < c.length; k++) {
+            clipped[k] = Math.max(c[k], 0);
+        }
+        return solve(w, 1.0, clipped, w.length, u, new Scratch());
     }
 
     /**
-     * Solves the chain LP for the weights sign·w[0 .. nodes − 1] (sign = ±1, applied exactly) and
-     * writes an optimal u into {@code u}.
+     * Solves the chain LP for the weights sign·w[0 .. nodes − 1] (sign = ±1, applied exactly) and step
+     * limits c[0 .. nodes − 2] &ge; 0, and writes an optimal u into {@code u}.
      */
     static double solve(double[] w, double sign, double[] c, int nodes, double[] u, Scratch s) {
         double[] ystar = new double[nodes];
@@ -101,7 +105,7 @@ final class ChainDp {
             leftLen = 0;
         }
         for (int k = n - 1; k >= 0; k--) {
-            double ck = Math.max(c[k], 0);
+            double ck = c[k];
             if (ystar != null) {
                 ystar[k + 1] = leftLen;
             }
@@ -130,7 +134,7 @@ final class ChainDp {
                 continue;
             }
             // (a) window maximum: trim min(c, y*) from the left end of the rising part
-            double m = Math.min(ck, leftLen);
+            double m = ck < leftLen ? ck : leftLen;
             double need = m;
             while (need > 0 && lo < g) {
                 double sv = sl[lo] + off;
