@@ -1,6 +1,5 @@
 package breakwater.design;
 
-import breakwater.catalog.BankEntry;
 import breakwater.catalog.Part;
 import breakwater.network.FrequencyGrid;
 import breakwater.network.ImpedanceEngine;
@@ -31,18 +30,29 @@ public final class CandidateJudge {
     private final double[] re;
     private final double[] im;
     private final double[] unitCost;
+    private final PowerNetwork fixed;
+    private final List<SeriesBranch> units;
+    /** Per candidate, the index of its case among the board's max_per_case limits, or −1. */
+    private final int[] caseLimitIndex;
+    private final int[] caseLimits;
+    private final int[] perCase;
 
     public CandidateJudge(BankEvaluator evaluator, List<Part> candidates) {
         this.evaluator = evaluator;
         this.candidates = List.copyOf(candidates);
         Scenario s = evaluator.scenario();
-        PowerNetwork fixed = NetworkBuilder.build(s, List.of(), evaluator.footprint());
-        List<SeriesBranch> units = new ArrayList<>();
+        this.fixed = NetworkBuilder.build(s, List.of(), evaluator.footprint());
+        List<SeriesBranch> unitList = new ArrayList<>();
         for (Part p : this.candidates) {
-            units.add(PartBranches.single(p, evaluator.footprint()));
+            unitList.add(PartBranches.single(p, evaluator.footprint()));
         }
+        this.units = List.copyOf(unitList);
+        List<String> limitedCases = new ArrayList<>(s.board().maxPerCase().keySet());
+        this.caseLimits = limitedCases.stream().mapToInt(c -> s.board().maxPerCase().get(c)).toArray();
+        this.perCase = new int[caseLimits.length];
+        this.caseLimitIndex = this.candidates.stream().mapToInt(p -> limitedCases.indexOf(p.caseCode())).toArray();
         FrequencyGrid grid = FrequencyGrid.logarithmic(s.band().fromHz(), s.band().toHz(), POINTS_PER_DECADE);
-        this.engine = new ImpedanceEngine(fixed, units, grid);
+        this.engine = new ImpedanceEngine(fixed, this.units, grid);
         this.re = new double[grid.size()];
         this.im = new double[grid.size()];
         this.unitCost = this.candidates.stream().mapToDouble(Part::unitCost).toArray();
@@ -67,23 +77,41 @@ public final class CandidateJudge {
         double target = rail.targetImpedanceOhms();
         double ripple = 20 * Math.log10(peak / min);
 
-        List<BankEntry> entries = new ArrayList<>();
+        // the bank's network and board figures straight from the counts (same rules as NetworkBuilder and
+        // BoardCheck, which the full evaluation uses; a test holds the two paths together)
+        List<SeriesBranch> board = new ArrayList<>(fixed.boardBranches());
         int total = 0;
+        int distinct = 0;
         double partsCost = 0;
+        java.util.Arrays.fill(perCase, 0);
         for (int i = 0; i < counts.length; i++) {
-            if (counts[i] > 0) {
-                entries.add(new BankEntry(candidates.get(i), counts[i]));
-                total += counts[i];
-                partsCost += unitCost[i] * counts[i];
+            int n = counts[i];
+            if (n > 0) {
+                board.add(units.get(i).parallel(n));
+                total += n;
+                distinct++;
+                partsCost += unitCost[i] * n;
+                if (caseLimitIndex[i] >= 0) {
+                    perCase[caseLimitIndex[i]] += n;
+                }
             }
         }
-        CapacitorBank bank = new CapacitorBank(entries);
-        double cost = partsCost + s.cost().placementPerPart() * total + s.cost().perLineItem() * entries.size();
+        double cost = partsCost + s.cost().placementPerPart() * total + s.cost().perLineItem() * distinct;
         int boardExcess = 0;
-        for (BoardCheck.Violation v : BoardCheck.violations(bank, s.board())) {
-            boardExcess += v.excess();
+        if (s.board().maxParts() >= 0 && total > s.board().maxParts()) {
+            boardExcess += total - s.board().maxParts();
         }
-        WorstCaseFigures wc = evaluator.worstCaseFigures(NetworkBuilder.build(s, entries, evaluator.footprint()));
+        if (s.board().maxDistinct() >= 0 && distinct > s.board().maxDistinct()) {
+            boardExcess += distinct - s.board().maxDistinct();
+        }
+        for (int c = 0; c < perCase.length; c++) {
+            if (perCase[c] > caseLimits[c]) {
+                boardExcess += perCase[c] - caseLimits[c];
+            }
+        }
+        PowerNetwork network = new PowerNetwork(fixed.regulatorResistanceOhms(), fixed.regulatorInductanceH(), board,
+                fixed.hasPackage(), fixed.packageResistanceOhms(), fixed.packageInductanceH(), fixed.loadBranches());
+        WorstCaseFigures wc = evaluator.worstCaseFigures(network);
         double targetExcess = s.requireTarget() ? Math.max(0, peak / target - 1) : 0;
         return new Judgement(wc.droopV(), wc.overshootV(), wc.droopExcessV(), wc.overshootExcessV(), boardExcess,
                 targetExcess, cost, ripple, peak / target, total);

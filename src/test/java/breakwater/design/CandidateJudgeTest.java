@@ -1,0 +1,60 @@
+package breakwater.design;
+
+import breakwater.Fixtures;
+import breakwater.catalog.Part;
+import breakwater.scenario.Board;
+import breakwater.scenario.Die;
+import breakwater.scenario.PackagePath;
+import breakwater.scenario.Plane;
+import breakwater.scenario.Rail;
+import org.junit.jupiter.api.Test;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Random;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+/** Two engines that must agree: the solver's fast judge against the full evaluation of the same bank. */
+class CandidateJudgeTest {
+    static final List<Part> PARTS = List.of(
+            new Part("bulk", "", "D", "polymer", 220e-6, 12e-3, 2e-9, 0.8e-9, 0.22, Double.NaN, Double.NaN, 1, -1),
+            new Part("mid", "", "0805", "X5R", 22e-6, 4e-3, 0.68e-9, 0.7e-9, 0.04, Double.NaN, Double.NaN, 0.6, -1),
+            new Part("small", "", "0402", "X5R", 1e-6, 15e-3, 0.35e-9, 0.45e-9, 0.004, Double.NaN, Double.NaN, 0.8, -1),
+            new Part("hf", "", "0402", "X7R", 100e-9, 35e-3, 0.35e-9, 0.45e-9, 0.002, Double.NaN, Double.NaN, 0.95, -1),
+            new Part("tiny", "", "0201", "X5R", 100e-9, 55e-3, 0.18e-9, 0.35e-9, 0.003, Double.NaN, Double.NaN, 0.85, -1));
+
+    @Test
+    void fastJudgeAgreesWithTheFullEvaluation() throws Exception {
+        var scenario = Fixtures.scenario()
+                .rail(new Rail("r", 0.9, 0.03, 5, 2.5, 1e-9))
+                .plane(new Plane(5e-9, 0.4e-3))
+                .packagePath(PackagePath.of(0.3e-3, 10e-12))
+                .die(new Die(600e-9, 4e-3))
+                .board(new Board(40, 3, Map.of("0402", 12, "0201", 5)))
+                .build();
+        BankEvaluator ev = new BankEvaluator(scenario, Optional.empty());
+        CandidateJudge judge = new CandidateJudge(ev, PARTS);
+        Random rnd = new Random(11);
+        for (int trial = 0; trial < 25; trial++) {
+            int[] counts = new int[PARTS.size()];
+            for (int i = 0; i < counts.length; i++) {
+                counts[i] = rnd.nextInt(3) == 0 ? 0 : rnd.nextInt(15);
+            }
+            Judgement j = judge.judge(counts);
+            Evaluation e = ev.evaluate(CapacitorBank.of(PARTS, counts));
+            // the worst case is the same exact computation: equal to rounding
+            assertThat(j.droopV()).isCloseTo(e.figures().droopV(), within(1e-12));
+            assertThat(j.overshootV()).isCloseTo(e.figures().overshootV(), within(1e-12));
+            assertThat(j.droopExcessV()).isCloseTo(e.figures().droopExcessV(), within(1e-12));
+            assertThat(j.costTotal()).isCloseTo(e.cost().total(), within(1e-12));
+            assertThat(j.totalParts()).isEqualTo(e.bank().totalParts());
+            int excess = e.board().stream().mapToInt(BoardCheck.Violation::excess).sum();
+            assertThat(j.boardExcess()).isEqualTo(excess);
+            // flatness is read on the coarser solver grid, without refinement: never above the refined peak
+            assertThat(j.peakOverTarget()).isLessThanOrEqualTo(e.impedance().peakOverTarget() * (1 + 1e-9));
+        }
+    }
+}
