@@ -38,7 +38,9 @@ import java.util.concurrent.atomic.AtomicBoolean;
  * nothing to do, and runs late acceptance over four kinds of move: the solver's change (any count in
  * range) and swap (two types exchange counts) moves, and {@link CountMoves} (nudge a count by ±1/±3,
  * replace a type by its neighbouring value). Several solvers with seeds seed, seed+1, … run in parallel
- * and the best is kept (ties go to the lowest seed, so a move-limited run is reproducible).
+ * and the best is kept (ties go to the lowest seed, so a move-limited run is reproducible). Without a
+ * move limit each thread restarts from the best bank so far with a fresh seed whenever its solver stops
+ * improving, until the time limit.
  *
  * <p>No Timefold type appears in this class's public API.
  */
@@ -113,17 +115,8 @@ public final class BankSearch {
         List<Future<BankPlan>> futures = new ArrayList<>();
         try {
             for (int k = 0; k < settings.solvers(); k++) {
-                long seed = settings.seed() + k;
-                Solver<BankPlan> solver = SolverFactory.<BankPlan>create(config(settings, seed)).buildSolver();
-                solver.addEventListener(ev -> offer(ev.getNewBestSolution().countVector()));
-                synchronized (running) {
-                    running.add(solver);
-                    if (stopRequested.get()) {
-                        solver.terminateEarly();
-                    }
-                }
-                BankPlan problem = problem(startCounts);
-                futures.add(exec.submit(() -> solver.solve(problem)));
+                int worker = k;
+                futures.add(exec.submit(() -> worker(worker, settings, startCounts)));
             }
             int[] best = null;
             BendableScore bestOfAll = null;
@@ -167,6 +160,54 @@ public final class BankSearch {
         }
     }
 
+    /**
+     * One solver thread: a first solve from the start; then, without a move limit and while time is left,
+     * restarts from the best bank found so far (by any thread) with a fresh seed, each ending when it has
+     * not improved for the unimproved limit. Restarts diversify where one long tabu walk would circle.
+     */
+    private BankPlan worker(int k, SearchSettings settings, int[] start) {
+        long deadline = startNanos + settings.timeLimit().toNanos();
+        BankPlan bestPlan = null;
+        BendableScore bestScore = null;
+        int[] from = start;
+        for (int round = 0; ; round++) {
+            long remaining = deadline - System.nanoTime();
+            if (stopRequested.get() || (round > 0 && remaining < 200_000_000L)) {
+                break;
+            }
+            long seed = settings.seed() + k + (long) round * settings.solvers();
+            Duration budget = Duration.ofNanos(Math.max(remaining, 1_000_000L));
+            Solver<BankPlan> solver = SolverFactory.<BankPlan>create(config(settings, seed, budget)).buildSolver();
+            solver.addEventListener(ev -> offer(ev.getNewBestSolution().countVector()));
+            synchronized (running) {
+                running.add(solver);
+            }
+            BankPlan plan;
+            try {
+                if (stopRequested.get()) {
+                    break;
+                }
+                plan = solver.solve(problem(from));
+            } finally {
+                synchronized (running) {
+                    running.remove(solver);
+                }
+            }
+            BendableScore score = ScoreLevels.of(pool.judge(plan.countVector()));
+            if (bestScore == null || score.compareTo(bestScore) > 0) {
+                bestScore = score;
+                bestPlan = plan;
+            }
+            if (settings.moveLimit() > 0) {
+                break; // a move-limited run is one solve per thread, so it stays reproducible
+            }
+            synchronized (this) {
+                from = bestCounts.clone();
+            }
+        }
+        return bestPlan != null ? bestPlan : problem(start);
+    }
+
     private synchronized void offer(int[] counts) {
         Judgement j = pool.judge(counts);
         BendableScore s = ScoreLevels.of(j);
@@ -186,8 +227,12 @@ public final class BankSearch {
     }
 
     SolverConfig config(SearchSettings settings, long seed) {
+        return config(settings, seed, settings.timeLimit());
+    }
+
+    SolverConfig config(SearchSettings settings, long seed, Duration timeLimit) {
         TerminationConfig termination = new TerminationConfig()
-                .withSpentLimit(settings.timeLimit())
+                .withSpentLimit(Duration.ofMillis(Math.max(1, timeLimit.toMillis())))
                 .withUnimprovedSpentLimit(settings.unimprovedLimit());
         if (settings.moveLimit() > 0) {
             termination.setMoveCountLimit(settings.moveLimit());

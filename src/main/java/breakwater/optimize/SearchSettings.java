@@ -30,14 +30,14 @@ public record SearchSettings(Duration timeLimit, Duration unimprovedLimit, long 
     }
 
     /**
-     * One solver per core (at most 4); a solver stops early when it has not improved for half the time
-     * limit (at least 5 s, at most the limit itself).
+     * One solver per core (at most 4); a solver that has not improved for an eighth of the time limit
+     * (at least 2 s, at most the limit) gives way to a restart from the best bank so far.
      */
     public static SearchSettings defaults(Duration timeLimit, long seed) {
         int cores = Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors()));
-        Duration unimproved = timeLimit.dividedBy(2);
-        if (unimproved.compareTo(Duration.ofSeconds(5)) < 0) {
-            unimproved = timeLimit.compareTo(Duration.ofSeconds(5)) < 0 ? timeLimit : Duration.ofSeconds(5);
+        Duration unimproved = timeLimit.dividedBy(8);
+        if (unimproved.compareTo(Duration.ofSeconds(2)) < 0) {
+            unimproved = timeLimit.compareTo(Duration.ofSeconds(2)) < 0 ? timeLimit : Duration.ofSeconds(2);
         }
         return new SearchSettings(timeLimit, unimproved, 0, seed, cores);
     }

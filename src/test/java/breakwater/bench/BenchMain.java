@@ -16,8 +16,8 @@ public final class BenchMain {
     }
 
     public static void main(String[] args) throws Exception {
-        if (args.length > 0 && args[0].equals("convergence")) {
-            SolveConvergence.main(args);
+        if (args.length > 0 && args[0].strip().startsWith("convergence")) {
+            SolveConvergence.main(args[0].strip().split("\\s+")); // one Maven property, split into words
             return;
         }
         String include = args.length > 0 && !args[0].isBlank() ? args[0] : ".*";

@@ -22,17 +22,18 @@ import java.util.Optional;
  * Whole-search benchmark (not JMH: it measures a search, not a call): for each demo scenario, several
  * seeded searches of {@code seconds} each; the best-known cost is the cheapest passing bank any of them
  * found, and each run reports when it first reached a passing bank within 1 % of that cost.
- * Run: {@code ./mvnw -B -Pbench -DskipTests verify -Dbench.args=convergence} (optionally
- * {@code -Dbench.seconds=60 -Dbench.runs=3}).
+ * Run: {@code ./mvnw -B -Pbench -DskipTests verify -Dbench.args=convergence}; for other durations
+ * {@code -Dbench.args="convergence 30 3"} (seconds per run, runs per scenario).
  */
 public final class SolveConvergence {
     private SolveConvergence() {
     }
 
     public static void main(String[] args) throws Exception {
-        int seconds = Integer.getInteger("bench.seconds", 60);
-        int runs = Integer.getInteger("bench.runs", 3);
-        List<String> scenarios = args.length > 1 ? List.of(args).subList(1, args.length)
+        // args: "convergence" [seconds per run] [runs per scenario] [scenario files...]
+        int seconds = args.length > 1 ? Integer.parseInt(args[1]) : 60;
+        int runs = args.length > 2 ? Integer.parseInt(args[2]) : 3;
+        List<String> scenarios = args.length > 3 ? List.of(args).subList(3, args.length)
                 : List.of("scenarios/drone-core.toml", "scenarios/buoy-io.toml", "scenarios/spectrometer-ddr.toml");
         System.out.printf(Locale.ROOT, "%d runs of %d s each, %d cores%n", runs, seconds,
                 Runtime.getRuntime().availableProcessors());
