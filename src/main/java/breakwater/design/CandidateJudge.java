@@ -36,6 +36,7 @@ public final class CandidateJudge {
     private final int[] caseLimitIndex;
     private final int[] caseLimits;
     private final int[] perCase;
+    private long unjudged;
 
     public CandidateJudge(BankEvaluator evaluator, List<Part> candidates) {
         this.evaluator = evaluator;
@@ -60,6 +61,11 @@ public final class CandidateJudge {
 
     public List<Part> candidates() {
         return candidates;
+    }
+
+    /** Candidates whose model failed its self-checks (scored as far outside the limits). */
+    public long unjudged() {
+        return unjudged;
     }
 
     /** Judges the bank with {@code counts[i]} parts of candidate i. */
@@ -111,7 +117,19 @@ public final class CandidateJudge {
         }
         PowerNetwork network = new PowerNetwork(fixed.regulatorResistanceOhms(), fixed.regulatorInductanceH(), board,
                 fixed.hasPackage(), fixed.packageResistanceOhms(), fixed.packageInductanceH(), fixed.loadBranches());
-        WorstCaseFigures wc = evaluator.worstCaseFigures(network);
+        WorstCaseFigures wc;
+        try {
+            wc = evaluator.worstCaseFigures(network);
+        } catch (breakwater.timedomain.ModelException unsolvable) {
+            // The model of this one candidate failed its self-checks: it cannot be judged, so the search
+            // must not pick it. It scores as a volt beyond both limits; the final verdict always comes
+            // from a full evaluation, which would report the failure as an internal error.
+            unjudged++;
+            double lower = evaluator.limits().lowerV();
+            double upper = evaluator.limits().upperV();
+            wc = new WorstCaseFigures(1, 1, evaluator.operatingPointV(), lower - 1, upper + 1, lower, upper,
+                    Double.POSITIVE_INFINITY);
+        }
         double targetExcess = s.requireTarget() ? Math.max(0, peak / target - 1) : 0;
         return new Judgement(wc.droopV(), wc.overshootV(), wc.droopExcessV(), wc.overshootExcessV(), boardExcess,
                 targetExcess, cost, ripple, peak / target, total);

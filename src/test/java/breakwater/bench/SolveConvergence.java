@@ -44,8 +44,8 @@ public final class SolveConvergence {
             List<SearchResult> results = new ArrayList<>();
             for (int r = 0; r < runs; r++) {
                 BankSearch search = new BankSearch(ev, c.parts(), MaxCounts.of(c.parts(), s));
-                SearchSettings settings = new SearchSettings(Duration.ofSeconds(seconds), Duration.ofSeconds(seconds),
-                        0, 1 + 10L * r, Math.min(4, Runtime.getRuntime().availableProcessors()));
+                // the settings a user gets from `solve --time-limit <seconds>s --seed <1 + 10 r>`
+                SearchSettings settings = SearchSettings.defaults(Duration.ofSeconds(seconds), 1 + 10L * r);
                 results.add(search.run(settings, CapacitorBank.EMPTY));
             }
             double best = results.stream().filter(x -> x.judgement().feasible())
