@@ -4,29 +4,22 @@ import breakwater.catalog.Part;
 import breakwater.design.BankEvaluator;
 import breakwater.design.CapacitorBank;
 import breakwater.design.Evaluation;
-import breakwater.design.Judgement;
 import breakwater.optimize.BankSearch;
 import breakwater.optimize.MaxCounts;
-import breakwater.optimize.SearchProgress;
 import breakwater.optimize.SearchResult;
 import breakwater.optimize.SearchSettings;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.time.Duration;
 import java.util.List;
 import java.util.Locale;
-import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.Callable;
 
-import static breakwater.units.EngineeringNotation.format;
-import static breakwater.units.Quantity.VOLTAGE;
 
 /** {@code breakwater solve SCENARIO}: searches for the cheapest bank that meets the spec. */
 @Command(name = "solve", mixinStandardHelpOptions = true,

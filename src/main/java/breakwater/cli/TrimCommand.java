@@ -11,7 +11,6 @@ import breakwater.optimize.BankSearch;
 import breakwater.optimize.CostDown;
 import breakwater.optimize.SearchResult;
 import breakwater.optimize.SearchSettings;
-import breakwater.report.ConsoleReport;
 import breakwater.report.Overlays;
 import breakwater.report.ReportModel;
 import com.fasterxml.jackson.databind.node.ArrayNode;
