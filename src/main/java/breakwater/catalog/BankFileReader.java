@@ -18,7 +18,8 @@ import java.util.Optional;
 /**
  * Reads a bank file (CSV, DESIGN.md §2): a header row {@code part,count} (any case, any order), then one
  * row per part of the catalog with how many of it are placed. {@code #} lines are comments. Rows with
- * count 0 are accepted and dropped.
+ * count 0 are accepted and dropped. Breakwater's own {@code bom.csv} reads back as a bank: its columns
+ * {@code description, case, unit_cost, extended_cost} are ignored and its {@code TOTAL} row skipped.
  *
  * <p>All problems of the file are thrown together in one {@link InputException}; diagnostics are
  * located as in {@link CatalogReader}: 1-based line, and the column of the offending field's first
@@ -27,6 +28,10 @@ import java.util.Optional;
 public final class BankFileReader {
 
     private static final List<String> COLUMNS = List.of("part", "count");
+    /** The other columns of Breakwater's own bom.csv: accepted and ignored, so a BOM can be read back. */
+    private static final List<String> BOM_COLUMNS = List.of("description", "case", "unit_cost", "extended_cost");
+    /** The part name of bom.csv's summary row, skipped when reading a BOM back. */
+    static final String BOM_TOTAL_ROW = "TOTAL";
 
     private BankFileReader() {
     }
@@ -66,6 +71,9 @@ public final class BankFileReader {
         for (int k = 0; k < table.header.size(); k++) {
             CsvTable.Cell cell = table.header.cell(k);
             String name = cell.value().toLowerCase(Locale.ROOT);
+            if (BOM_COLUMNS.contains(name)) {
+                continue;
+            }
             if (!COLUMNS.contains(name)) {
                 Diagnostic d = Diagnostic.at(source, cell.line(), cell.column(), "unknown column '"
                         + cell.value() + "', a bank file has exactly the columns part, count");
@@ -102,6 +110,9 @@ public final class BankFileReader {
             CsvTable.Cell partCell = row.cell(partIndex);
             CsvTable.Cell countCell = row.cell(countIndex);
             String name = partCell.value();
+            if (name.equals(BOM_TOTAL_ROW) && catalog.find(name).isEmpty()) {
+                continue; // the summary row of a bom.csv written by Breakwater
+            }
             Optional<Part> part = Optional.empty();
             if (name.isEmpty()) {
                 problems.error(source, partCell.line(), partCell.column(),

@@ -18,7 +18,8 @@ import java.util.concurrent.Callable;
 
 /** {@code breakwater check SCENARIO --bank FILE}: judges a given bank. */
 @Command(name = "check", mixinStandardHelpOptions = true,
-        description = {"Judges a bank you give: impedance, flatness, anti-resonances, worst-case transient, cost.",
+        description = {"Judges a bank you give.", "",
+            "Impedance, flatness, anti-resonances, the exact worst-case transient, cost.",
             "Exit 0 when it meets the spec, 1 when it does not."})
 final class CheckCommand implements Callable<Integer> {
 

@@ -42,7 +42,9 @@ import static breakwater.units.Quantity.VOLTAGE;
 /** {@code breakwater compare SCENARIO}: the best bank under each footprint, side by side. */
 @Command(name = "compare", mixinStandardHelpOptions = true,
         description = {
-            "Compares layout options: for each footprint (default: every [footprint.NAME] of the scenario, in",
+            "Compares footprints (layout options) side by side.",
+            "",
+            "For each footprint (default: every [footprint.NAME] of the scenario, in",
             "file order) solves for the cheapest bank under that footprint's mounting inductances, or with",
             "--bank judges the given bank under each, and shows cost, parts, worst droop and overshoot,",
             "margin, ripple and peak |Z| side by side; the report overlays their impedance and worst case.",

@@ -32,6 +32,8 @@ import static breakwater.units.Quantity.VOLTAGE;
 /** {@code breakwater frontier SCENARIO}: what a smaller worst excursion costs. */
 @Command(name = "frontier", mixinStandardHelpOptions = true,
         description = {
+            "Shows what each smaller worst excursion costs.",
+            "",
             "The cost-excursion trade-off: first the smallest worst excursion (larger of worst droop and worst",
             "overshoot) the search reaches, then for K limits evenly spaced from it up to the spec's allowed",
             "excursion, the cheapest bank whose worst droop and overshoot both stay within the limit (and",

@@ -51,6 +51,7 @@ public final class Main implements Runnable {
         cl.setOut(new PrintWriter(out, true, StandardCharsets.UTF_8));
         cl.setErr(new PrintWriter(err, true, StandardCharsets.UTF_8));
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.setUsageHelpWidth(110); // descriptions are written for this width; no re-wrapping
         cl.setExitCodeExceptionMapper(Main::exitCodeFor);
         cl.setParameterExceptionHandler((ex, a) -> {
             CommandLine c = ex.getCommandLine();

@@ -24,6 +24,8 @@ import java.util.concurrent.Callable;
 /** {@code breakwater solve SCENARIO}: searches for the cheapest bank that meets the spec. */
 @Command(name = "solve", mixinStandardHelpOptions = true,
         description = {
+            "Finds the cheapest bank that meets the spec.",
+            "",
             "Searches part counts for the cheapest bank whose exact worst-case transient stays inside the",
             "rail's tolerance (and, with [objective] require_target, whose |Z| stays under the target),",
             "within the board limits; ties are broken by flatter impedance, then fewer parts.",

@@ -37,7 +37,9 @@ import static breakwater.units.Quantity.VOLTAGE;
 /** {@code breakwater trim SCENARIO}: the cheapest bank that loses nothing the existing bank achieves. */
 @Command(name = "trim", mixinStandardHelpOptions = true,
         description = {
-            "Costs down an existing bank: searches, starting from it, for the cheapest bank whose worst droop",
+            "Costs down an existing bank without losing margin.",
+            "",
+            "Searches, starting from the existing bank, for the cheapest bank whose worst droop",
             "and worst overshoot are no worse than the existing bank's (--keep margin, the default) or that",
             "merely meets the spec (--keep spec); board limits and [objective] require_target still hold.",
             "The existing bank is the scenario's [existing] file unless --bank names another.",

@@ -2,6 +2,7 @@ package breakwater.design;
 
 import breakwater.catalog.Part;
 import breakwater.network.FrequencyGrid;
+import breakwater.network.ImpedanceAnalysis;
 import breakwater.network.ImpedanceEngine;
 import breakwater.network.NetworkBuilder;
 import breakwater.network.PartBranches;
@@ -16,19 +17,22 @@ import java.util.List;
 /**
  * The solver's fast path through {@link BankEvaluator}: judges a bank given as counts over a fixed list
  * of candidate parts. The worst case is the exact one (the same computation as
- * {@link BankEvaluator#evaluate}); flatness is read on a coarser grid over the band only
- * ({@value #POINTS_PER_DECADE} points per decade, no refinement), which is enough to rank banks; the
+ * {@link BankEvaluator#evaluate}); flatness is read at the report's grid density over the band
+ * only, the highest peak refined by the same Brent search, which is enough to rank banks; the
  * final verdict always comes from a full evaluation. Not thread-safe: one per solver thread.
  */
 public final class CandidateJudge {
     /** Grid density for the solver's flatness figures. */
-    public static final int POINTS_PER_DECADE = 40;
+    public static final int POINTS_PER_DECADE = FrequencyGrid.DEFAULT_POINTS_PER_DECADE;
 
     private final BankEvaluator evaluator;
     private final List<Part> candidates;
     private final ImpedanceEngine engine;
     private final double[] re;
     private final double[] im;
+    private final double[] mag;
+    /** Relative guard on the required-target check; see {@link #judge}. */
+    static final double TARGET_GUARD = 1e-6;
     private final double[] unitCost;
     private final PowerNetwork fixed;
     private final List<SeriesBranch> units;
@@ -56,6 +60,7 @@ public final class CandidateJudge {
         this.engine = new ImpedanceEngine(fixed, this.units, grid);
         this.re = new double[grid.size()];
         this.im = new double[grid.size()];
+        this.mag = new double[grid.size()];
         this.unitCost = this.candidates.stream().mapToDouble(Part::unitCost).toArray();
     }
 
@@ -75,9 +80,14 @@ public final class CandidateJudge {
         engine.sweep(counts, re, im);
         double peak = 0;
         double min = Double.POSITIVE_INFINITY;
+        int at = 0;
         for (int k = 0; k < re.length; k++) {
             double m = Math.sqrt(re[k] * re[k] + im[k] * im[k]);
-            peak = Math.max(peak, m);
+            mag[k] = m;
+            if (m > peak) {
+                peak = m;
+                at = k;
+            }
             min = Math.min(min, m);
         }
         double target = rail.targetImpedanceOhms();
@@ -117,6 +127,13 @@ public final class CandidateJudge {
         }
         PowerNetwork network = new PowerNetwork(fixed.regulatorResistanceOhms(), fixed.regulatorInductanceH(), board,
                 fixed.hasPackage(), fixed.packageResistanceOhms(), fixed.packageInductanceH(), fixed.loadBranches());
+        if (at > 0 && at < mag.length - 1) {
+            // refine the grid maximum on the network itself with the full analysis's own Brent search, so
+            // the solver's peak (and its target check) agrees with the final verdict
+            double[] fHz = engine.grid().frequenciesHz();
+            peak = Math.max(peak, ImpedanceAnalysis.refineExtremum(network::magnitude, fHz[at - 1], fHz[at + 1], true)[1]);
+        }
+        double targetExcess = s.requireTarget() ? Math.max(0, peak * (1 + TARGET_GUARD) / target - 1) : 0;
         WorstCaseFigures wc;
         try {
             wc = evaluator.worstCaseFigures(network);
@@ -130,7 +147,6 @@ public final class CandidateJudge {
             wc = new WorstCaseFigures(1, 1, evaluator.operatingPointV(), lower - 1, upper + 1, lower, upper,
                     Double.POSITIVE_INFINITY);
         }
-        double targetExcess = s.requireTarget() ? Math.max(0, peak / target - 1) : 0;
         return new Judgement(wc.droopV(), wc.overshootV(), wc.droopExcessV(), wc.overshootExcessV(), boardExcess,
                 targetExcess, cost, ripple, peak / target, total);
     }

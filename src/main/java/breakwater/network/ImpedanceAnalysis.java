@@ -125,6 +125,15 @@ public final class ImpedanceAnalysis {
 
     /** Brent search on ln f in [lo, hi]; returns {f, |Z|(f)}. */
     static double[] refine(DoubleUnaryOperator mag, double loHz, double hiHz, GoalType goal) {
+        return refineExtremum(mag, loHz, hiHz, goal == GoalType.MAXIMIZE);
+    }
+
+    /**
+     * Brent search for the maximum (or minimum) of |Z| on ln f in [lo, hi], as the full analysis does;
+     * returns {f, |Z|(f)}.
+     */
+    public static double[] refineExtremum(DoubleUnaryOperator mag, double loHz, double hiHz, boolean maximum) {
+        GoalType goal = maximum ? GoalType.MAXIMIZE : GoalType.MINIMIZE;
         BrentOptimizer brent = new BrentOptimizer(1e-10, 1e-14);
         double a = Math.log(loHz);
         double b = Math.log(hiHz);

@@ -23,7 +23,7 @@ public final class CsvOutputs {
         for (BankEntry be : e.bank().entries()) {
             w.write(Csv.text(be.part().name()) + "," + Csv.text(be.part().description()) + ","
                     + Csv.text(be.part().caseCode()) + "," + be.count() + "," + Csv.num(be.part().unitCost()) + ","
-                    + Csv.num(be.part().unitCost() * be.count()) + "\n");
+                    + Csv.num(breakwater.design.CostBreakdown.extended(be).doubleValue()) + "\n");
         }
         String split = String.format(Locale.ROOT, "parts %.4f + placement %.4f + line items %.4f%s",
                 e.cost().partsCost(), e.cost().placementCost(), e.cost().lineItemCost(),

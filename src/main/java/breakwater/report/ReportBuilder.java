@@ -63,8 +63,10 @@ public final class ReportBuilder {
 
         List<ReportModel.KeyFigure> keys = new ArrayList<>();
         ReportModel.Tone wcTone = wc.passes() ? ReportModel.Tone.GOOD : ReportModel.Tone.BAD;
-        keys.add(new ReportModel.KeyFigure("Worst droop", format(wc.droopV(), VOLTAGE), wcTone));
-        keys.add(new ReportModel.KeyFigure("Worst overshoot", format(wc.overshootV(), VOLTAGE), wcTone));
+        keys.add(new ReportModel.KeyFigure("Worst droop", format(wc.droopV(), VOLTAGE),
+                wc.droopExcessV() > 0 ? ReportModel.Tone.BAD : ReportModel.Tone.GOOD));
+        keys.add(new ReportModel.KeyFigure("Worst overshoot", format(wc.overshootV(), VOLTAGE),
+                wc.overshootExcessV() > 0 ? ReportModel.Tone.BAD : ReportModel.Tone.GOOD));
         keys.add(new ReportModel.KeyFigure("V_min / V_max", ConsoleReport.volts(wc.minVoltageV()) + " / "
                 + ConsoleReport.volts(wc.maxVoltageV()), wcTone));
         keys.add(new ReportModel.KeyFigure("Margin to the limits", format(wc.marginV(), VOLTAGE), wcTone));
@@ -129,7 +131,10 @@ public final class ReportBuilder {
                         + "The target impedance promises an excursion of ΔI·Z_t = "
                         + format(r.currentStepA() * r.targetImpedanceOhms(), VOLTAGE)
                         + "; a load that switches at the rhythm of the anti-resonances piles their ringing up, which is "
-                        + "why the worst case can be several times larger (the rogue factor)."));
+                        + "why the worst case can be several times larger. Here it is "
+                        + String.format(Locale.ROOT, "%.2f", wc.rogueFactor()) + " × ΔI·Z_t (the rogue factor)"
+                        + (wc.rogueFactor() < 1 ? ": this bank keeps |Z| well under the target, so it stays inside the promise."
+                        : ": the target impedance alone would have promised too little.")));
         double window = closeUpWindowS(m, r.edgeTimeS(), run.droop());
         ReportModel.WaveformSeries close = crop("worst-case droop pattern, close-up", run.droop(), window);
         if (close != null) {

@@ -160,6 +160,18 @@ class CliTest {
     }
 
     @Test
+    void aBomWrittenByCheckReadsBackAsTheSameBank(@TempDir Path dir) throws IOException {
+        Path out = dir.resolve("first");
+        run("check", DEMO.toString(), "--bank", DEMO_BANK.toString(), "--out", out.toString(), "--quiet");
+        Run again = run("check", DEMO.toString(), "--bank", out.resolve("bom.csv").toString(), "--json");
+        assertThat(again.code()).as(again.err()).isIn(ExitCodes.OK, ExitCodes.SPEC_NOT_MET);
+        JsonNode first = new ObjectMapper().readTree(out.resolve("summary.json").toFile());
+        JsonNode second = new ObjectMapper().readTree(again.out());
+        assertThat(second.path("bank")).isEqualTo(first.path("bank"));
+        assertThat(second.path("cost_total").asDouble()).isEqualTo(first.path("cost_total").asDouble());
+    }
+
+    @Test
     void jsonGoesToStandardOutput() throws IOException {
         Run r = run("check", DEMO.toString(), "--bank", DEMO_BANK.toString(), "--json");
         JsonNode s = new ObjectMapper().readTree(r.out());
