@@ -104,8 +104,18 @@ public final class BankSearch {
             given[i] = Math.min(given[i], maxCounts[i]);
         }
         offer(given);
-        int[] startCounts = pool.judge(given).feasible() ? given
-                : ImpedanceShaping.start(pool.evaluator(), candidates, maxCounts, given, c -> pool.judge(c).feasible());
+        int[] shaped = given;
+        if (!pool.judge(given).feasible()) {
+            // shape from the given bank and from scratch; start from the better of the two (a failing
+            // existing bank can be a poor place to grow from)
+            int[] grown = ImpedanceShaping.start(pool.evaluator(), candidates, maxCounts, given,
+                    c -> pool.judge(c).feasible());
+            int[] fresh = ImpedanceShaping.start(pool.evaluator(), candidates, maxCounts, new int[given.length],
+                    c -> pool.judge(c).feasible());
+            shaped = ScoreLevels.of(pool.judge(fresh)).compareTo(ScoreLevels.of(pool.judge(grown))) > 0
+                    ? fresh : grown;
+        }
+        int[] startCounts = shaped;
         offer(startCounts);
         ExecutorService exec = Executors.newFixedThreadPool(settings.solvers(), r -> {
             Thread t = new Thread(r, "breakwater-solver");
