@@ -17,13 +17,14 @@ import java.util.List;
 /**
  * The solver's fast path through {@link BankEvaluator}: judges a bank given as counts over a fixed list
  * of candidate parts. The worst case is the exact one (the same computation as
- * {@link BankEvaluator#evaluate}); flatness is read at the report's grid density over the band
- * only, the highest peak refined by the same Brent search, which is enough to rank banks; the
+ * {@link BankEvaluator#evaluate}); flatness is read on a coarser grid over the band only
+ * ({@value #POINTS_PER_DECADE} points per decade), with the two highest peaks refined by the full
+ * analysis's Brent search when the target is required and near, which is enough to rank banks; the
  * final verdict always comes from a full evaluation. Not thread-safe: one per solver thread.
  */
 public final class CandidateJudge {
     /** Grid density for the solver's flatness figures. */
-    public static final int POINTS_PER_DECADE = FrequencyGrid.DEFAULT_POINTS_PER_DECADE;
+    public static final int POINTS_PER_DECADE = 50;
 
     private final BankEvaluator evaluator;
     private final List<Part> candidates;
@@ -33,6 +34,8 @@ public final class CandidateJudge {
     private final double[] mag;
     /** Relative guard on the required-target check; see {@link #judge}. */
     static final double TARGET_GUARD = 1e-6;
+    /** Peaks above this share of the target are refined when the target is required. */
+    static final double REFINE_ABOVE = 0.8;
     private final double[] unitCost;
     private final PowerNetwork fixed;
     private final List<SeriesBranch> units;
@@ -127,11 +130,21 @@ public final class CandidateJudge {
         }
         PowerNetwork network = new PowerNetwork(fixed.regulatorResistanceOhms(), fixed.regulatorInductanceH(), board,
                 fixed.hasPackage(), fixed.packageResistanceOhms(), fixed.packageInductanceH(), fixed.loadBranches());
-        if (at > 0 && at < mag.length - 1) {
-            // refine the grid maximum on the network itself with the full analysis's own Brent search, so
-            // the solver's peak (and its target check) agrees with the final verdict
-            double[] fHz = engine.grid().frequenciesHz();
-            peak = Math.max(peak, ImpedanceAnalysis.refineExtremum(network::magnitude, fHz[at - 1], fHz[at + 1], true)[1]);
+        // where the target is required and the peak comes near it, refine the two highest local maxima of the
+        // grid on the network itself with the full analysis's own Brent search, so the solver's target
+        // check agrees with the final verdict (elsewhere the grid value ranks banks well enough)
+        boolean refine = s.requireTarget() && peak > REFINE_ABOVE * rail.targetImpedanceOhms();
+        int second = -1;
+        for (int k = 1; k < mag.length - 1; k++) {
+            if (k != at && mag[k] > mag[k - 1] && mag[k] >= mag[k + 1] && (second < 0 || mag[k] > mag[second])) {
+                second = k;
+            }
+        }
+        double[] fHz = engine.grid().frequenciesHz();
+        for (int k : new int[] {at, second}) {
+            if (refine && k > 0 && k < mag.length - 1) {
+                peak = Math.max(peak, ImpedanceAnalysis.refineExtremum(network::magnitude, fHz[k - 1], fHz[k + 1], true)[1]);
+            }
         }
         double targetExcess = s.requireTarget() ? Math.max(0, peak * (1 + TARGET_GUARD) / target - 1) : 0;
         WorstCaseFigures wc;

@@ -34,6 +34,7 @@ class CandidateJudgeTest {
                 .packagePath(PackagePath.of(0.3e-3, 10e-12))
                 .die(new Die(600e-9, 4e-3))
                 .board(new Board(40, 3, Map.of("0402", 12, "0201", 5)))
+                .requireTarget(true)
                 .build();
         BankEvaluator ev = new BankEvaluator(scenario, Optional.empty());
         CandidateJudge judge = new CandidateJudge(ev, PARTS);
@@ -53,10 +54,16 @@ class CandidateJudgeTest {
             assertThat(j.totalParts()).isEqualTo(e.bank().totalParts());
             int excess = e.board().stream().mapToInt(BoardCheck.Violation::excess).sum();
             assertThat(j.boardExcess()).isEqualTo(excess);
-            // the peak: both refine with the same Brent search on the network (from different grids); 1e-6
-            // relative is the guard the solver adds to its target check
-            assertThat(j.peakOverTarget()).isCloseTo(e.impedance().peakOverTarget(),
-                    within(1e-6 * e.impedance().peakOverTarget()));
+            double full = e.impedance().peakOverTarget();
+            if (full > 1.0) {
+                // near or over the target both refine with the same Brent search on the network (from different
+                // grids); 1e-6 relative is the guard the solver adds to its target check
+                assertThat(j.peakOverTarget()).isCloseTo(full, within(1e-6 * full));
+                assertThat(j.targetExcess()).isPositive();
+            } else {
+                // far under it the solver's grid value may only fall short of the refined peak
+                assertThat(j.peakOverTarget()).isLessThanOrEqualTo(full * (1 + 1e-6));
+            }
         }
     }
 }
