@@ -121,7 +121,8 @@ final class TrimCommand implements Callable<Integer> {
                              boolean kept) {
         String currency = in.scenario().cost().currency();
         String cur = currency.isEmpty() ? "" : " " + currency;
-        double savings = old.cost().total() - e.cost().total();
+        // in decimal, like the costs themselves (0.062, not 0.06200000000000028)
+        double savings = java.math.BigDecimal.valueOf(old.cost().total()).subtract(java.math.BigDecimal.valueOf(e.cost().total())).doubleValue();
         List<CostDown.Change> changes = CostDown.changes(d.existing(), d.chosen());
         WorstCaseFigures was = old.figures();
         WorstCaseFigures now = e.figures();
@@ -203,7 +204,7 @@ final class TrimCommand implements Callable<Integer> {
             w.put("passes", was.passes());
             ex.putObject("impedance").put("peak_ohm", old.impedance().peakOhms());
             t.put("savings", savings);
-            t.put("savings_per_1000", 1000 * savings);
+            t.put("savings_per_1000", java.math.BigDecimal.valueOf(savings).multiply(java.math.BigDecimal.valueOf(1000)).doubleValue());
             t.put("keep_rule_met", kept);
             ArrayNode arr = t.putArray("changes");
             for (CostDown.Change ch : changes) {
