@@ -33,38 +33,31 @@ public final class Verdicts {
 
     /** Why the bank does not meet the spec, one line per reason (empty when it does). */
     public static java.util.List<String> reasons(Scenario s, Evaluation e) {
-        String d = describe(s, e);
         java.util.List<String> out = new java.util.ArrayList<>();
-        for (String line : d.split("\n")) {
-            if (line.startsWith("  ")) {
-                out.add(line.strip());
-            }
+        var wc = e.figures();
+        if (wc.droopExcessV() > 0) {
+            out.add("worst-case droop falls " + format(wc.droopExcessV(), VOLTAGE) + " below the lower limit"
+                    + worstResonance(e).map(a -> " (largest anti-resonance: " + a + ")").orElse(""));
+        }
+        if (wc.overshootExcessV() > 0) {
+            out.add("worst-case overshoot rises " + format(wc.overshootExcessV(), VOLTAGE) + " above the upper limit");
+        }
+        for (BoardCheck.Violation v : e.board()) {
+            out.add("board limit " + v.describe());
+        }
+        if (s.requireTarget() && !e.impedance().underTarget()) {
+            out.add(String.format(Locale.ROOT, "|Z| exceeds the target (objective.require_target): peak %.2f × target",
+                    e.impedance().peakOverTarget()));
         }
         return out;
     }
 
+    /** The verdict in words for the console: the headline, one indented line per reason, the caution. */
     public static String describe(Scenario s, Evaluation e) {
-        StringBuilder b = new StringBuilder();
-        if (meetsSpec(s, e)) {
-            b.append("MEETS SPEC");
-        } else {
-            b.append("DOES NOT MEET SPEC:");
-            var wc = e.figures();
-            if (wc.droopExcessV() > 0) {
-                b.append("\n  worst-case droop falls ").append(format(wc.droopExcessV(), VOLTAGE))
-                        .append(" below the lower limit");
-                worstResonance(e).ifPresent(a -> b.append(" (largest anti-resonance: ").append(a).append(')'));
-            }
-            if (wc.overshootExcessV() > 0) {
-                b.append("\n  worst-case overshoot rises ").append(format(wc.overshootExcessV(), VOLTAGE))
-                        .append(" above the upper limit");
-            }
-            for (BoardCheck.Violation v : e.board()) {
-                b.append("\n  board limit ").append(v.describe());
-            }
-            if (s.requireTarget() && !e.impedance().underTarget()) {
-                b.append(String.format(Locale.ROOT, "%n  |Z| exceeds the target (objective.require_target): peak %.2f × target",
-                        e.impedance().peakOverTarget()));
+        StringBuilder b = new StringBuilder(meetsSpec(s, e) ? "MEETS SPEC" : "DOES NOT MEET SPEC:");
+        if (!meetsSpec(s, e)) {
+            for (String r : reasons(s, e)) {
+                b.append("\n  ").append(r);
             }
         }
         b.append("\nA model is not a measurement: verify the design on hardware.");
