@@ -146,10 +146,15 @@ public final class BankEvaluator {
 
     /** The exact worst case of {@code network} in volts: the one computation solver and reports share. */
     public WorstCaseFigures worstCaseFigures(PowerNetwork network) {
+        return worstCaseFigures(network, PoleResidueModel.of(network));
+    }
+
+    /** As {@link #worstCaseFigures(PowerNetwork)}, from the network's model already built. */
+    public WorstCaseFigures worstCaseFigures(PowerNetwork network, PoleResidueModel model) {
         breakwater.timedomain.WorstCaseFigures f;
         try {
             // the figures-only path: the same exact values as analyze(), without building the patterns
-            f = WorstCaseAnalyzer.figures(PoleResidueModel.of(network), scenario.rail().edgeTimeS());
+            f = WorstCaseAnalyzer.figures(model, scenario.rail().edgeTimeS());
         } catch (UnboundedWorstCaseException e) {
             throw new IllegalStateException("unbounded worst case after the constructor's check", e);
         }

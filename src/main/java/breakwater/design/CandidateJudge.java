@@ -10,6 +10,7 @@ import breakwater.network.PowerNetwork;
 import breakwater.network.SeriesBranch;
 import breakwater.scenario.Rail;
 import breakwater.scenario.Scenario;
+import breakwater.timedomain.PoleResidueModel;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -44,6 +45,20 @@ public final class CandidateJudge {
     private final int[] caseLimits;
     private final int[] perCase;
     private long unjudged;
+    /**
+     * The last model built for each set of distinct parts in use (least recently used dropped): the next
+     * bank with the same parts starts its pole search there ({@link PoleResidueModel#near}).
+     */
+    private final java.util.LinkedHashMap<java.util.BitSet, PoleResidueModel> recentModels =
+            new java.util.LinkedHashMap<>(64, 0.75f, true) {
+                @Override
+                protected boolean removeEldestEntry(java.util.Map.Entry<java.util.BitSet, PoleResidueModel> eldest) {
+                    return size() > RECENT_MODELS;
+                }
+            };
+    static final int RECENT_MODELS = 256;
+    private long models;
+    private long warmStarts;
 
     public CandidateJudge(BankEvaluator evaluator, List<Part> candidates) {
         this.evaluator = evaluator;
@@ -76,6 +91,11 @@ public final class CandidateJudge {
         return unjudged;
     }
 
+    /** Models built so far, and how many of them started from a neighbour's poles. */
+    public long[] modelStarts() {
+        return new long[] {models, warmStarts};
+    }
+
     /** Judges the bank with {@code counts[i]} parts of candidate i. */
     public Judgement judge(int[] counts) {
         Scenario s = evaluator.scenario();
@@ -101,6 +121,7 @@ public final class CandidateJudge {
         List<SeriesBranch> board = new ArrayList<>(fixed.boardBranches());
         int total = 0;
         int distinct = 0;
+        java.util.BitSet used = new java.util.BitSet(counts.length);
         double partsCost = 0;
         java.util.Arrays.fill(perCase, 0);
         for (int i = 0; i < counts.length; i++) {
@@ -109,6 +130,7 @@ public final class CandidateJudge {
                 board.add(units.get(i).parallel(n));
                 total += n;
                 distinct++;
+                used.set(i);
                 partsCost += unitCost[i] * n;
                 if (caseLimitIndex[i] >= 0) {
                     perCase[caseLimitIndex[i]] += n;
@@ -149,7 +171,14 @@ public final class CandidateJudge {
         double targetExcess = s.requireTarget() ? Math.max(0, peak * (1 + TARGET_GUARD) / target - 1) : 0;
         WorstCaseFigures wc;
         try {
-            wc = evaluator.worstCaseFigures(network);
+            PoleResidueModel near = recentModels.get(used);
+            PoleResidueModel model = near != null ? near.near(network) : PoleResidueModel.of(network);
+            recentModels.put(used, model);
+            models++;
+            if (model.warmStarted()) {
+                warmStarts++;
+            }
+            wc = evaluator.worstCaseFigures(network, model);
         } catch (breakwater.timedomain.ModelException unsolvable) {
             // The model of this one candidate failed its self-checks: it cannot be judged, so the search
             // must not pick it. It scores as a volt beyond both limits; the final verdict always comes

@@ -11,8 +11,10 @@ package breakwater.timedomain;
  * steps are taken at once (l ≤ 4). A sign change brackets one crossing; a pair of crossings inside one step (a shallow dip
  * through zero) is caught from the slopes at both ends: the cubic Hermite interpolant locates the
  * extremum, which is evaluated exactly. Each crossing is refined from the cubic Hermite guess with one or
- * two exact evaluations of h, h', h'' and H and a second-order Taylor step; the resulting error in the
- * integrals is of order h'''·ε⁴ (ε the final correction), far below the double-precision floor.
+ * two exact evaluations of h, h', h'' and H and a second-order Taylor step, taken once the correction ε is
+ * at most 1e-3 of the step Δ: H is then known at the crossing to its Taylor remainder h'''·ε⁴/24 &le;
+ * Σ|w r| |p|³ (1e-3·π/(4|p|))⁴/24 &lt; 2e-14 · Σ|w r|/|p|, i.e. below 2e-14·S per crossing, and the
+ * crossing time itself to order ε³, which moves the integrals only at second order (h = 0 there).
  *
  * <p>Modes die one by one: a mode is dropped once its tail bound |w r| e^{Re(p) t}/|Re p| falls below
  * 1e-13 of S = Σ |w r|/|Re p| (S bounds ∫|h|); the march stops when the total tail bound is below
@@ -49,6 +51,8 @@ final class ImpulseMarch {
     private final double[][] er;
     private final double[][] ei;
     private final double[] bound;
+    /** 1/(−Re p). */
+    private final double[] decay;
     private int na;
 
     // exact evaluation results
@@ -77,6 +81,7 @@ final class ImpulseMarch {
         er = new double[LEVELS][n];
         ei = new double[LEVELS][n];
         bound = new double[n];
+        decay = new double[n];
     }
 
     private void reset() {
@@ -96,7 +101,8 @@ final class ImpulseMarch {
             c1[k] = -a * Math.sqrt(p2);
             zr[k] = m.weight[k] * m.rr[k];
             zi[k] = m.weight[k] * m.ri[k];
-            b0[k] = Math.hypot(zr[k], zi[k]) / -a;
+            decay[k] = 1 / -a;
+            b0[k] = Math.hypot(zr[k], zi[k]) * decay[k];
             bound[k] = b0[k];
         }
     }
@@ -104,7 +110,7 @@ final class ImpulseMarch {
     /** Removes active mode j, keeping the order. */
     private void removeActive(int j) {
         int len = na - j - 1;
-        for (double[] arr : new double[][]{pr, pi, ipr, ipi, p2r, p2i, c4, c1, b0, zr, zi, bound}) {
+        for (double[] arr : new double[][]{pr, pi, ipr, ipi, p2r, p2i, c4, c1, b0, zr, zi, bound, decay}) {
             System.arraycopy(arr, j + 1, arr, j, len);
         }
         for (int l = 0; l < LEVELS; l++) {
@@ -154,7 +160,8 @@ final class ImpulseMarch {
                 bigH = 0;
                 slopeBound = 0;
                 for (int k = na - 1; k >= 0; k--) {
-                    double bk = b0[k] * Math.exp(pr[k] * t);
+                    // |w r e^{pt}|/|Re p| from the mode's current value (equals b0·e^{Re p·t})
+                    double bk = Math.sqrt(zr[k] * zr[k] + zi[k] * zi[k]) * decay[k];
                     if (bk <= dropLevel) {
                         removeActive(k);
                         continue;
@@ -327,7 +334,7 @@ final class ImpulseMarch {
                     eps = -h / den;
                 }
             }
-            if (hp != 0 && Math.abs(eps) <= 1e-5 * span && guess + eps >= lo && guess + eps <= hi) {
+            if (hp != 0 && Math.abs(eps) <= 1e-3 * span && guess + eps >= lo && guess + eps <= hi) {
                 rootT = guess + eps;
                 rootH = xH + eps * (h + eps * (0.5 * hp + eps * hpp / 6.0));
                 return;
@@ -380,7 +387,7 @@ final class ImpulseMarch {
             if (!(next > lo && next < hi)) {
                 next = 0.5 * (lo + hi);
             }
-            if (Math.abs(next - x) < 1e-12) {
+            if (Math.abs(next - x) < 1e-9) {
                 return next;
             }
             x = next;

@@ -67,9 +67,15 @@ public final class PoleResidueModel {
     private final double constantOhms;
     private final double seriesInductanceH;
     private final double dcOhms;
+    /** Finite eigenvalues of the circuit's pencil, each conjugate counted: the degree of its denominator. */
+    private final int degree;
+    private final long[] structure;
+    /** Whether the poles came from a neighbour's poles ({@link #near}) rather than the eigenvalue search. */
+    private boolean warmStarted;
 
     private PoleResidueModel(int modes, double[] pr, double[] pi, double[] rr, double[] ri, double[] weight,
-                             double directOhms, double constantOhms, double seriesInductanceH, double dcOhms) {
+                             double directOhms, double constantOhms, double seriesInductanceH, double dcOhms,
+                             int degree, long[] structure) {
         this.modes = modes;
         this.pr = pr;
         this.pi = pi;
@@ -80,6 +86,8 @@ public final class PoleResidueModel {
         this.constantOhms = constantOhms;
         this.seriesInductanceH = seriesInductanceH;
         this.dcOhms = dcOhms;
+        this.degree = degree;
+        this.structure = structure;
     }
 
     /**
@@ -88,8 +96,68 @@ public final class PoleResidueModel {
      * @throws ModelException when the network has an undamped or growing mode, or a self-check fails
      */
     public static PoleResidueModel of(PowerNetwork network) {
-        Ladder ladder = new Ladder(network);
         double[] cand = candidatePoles(network);
+        PoleResidueModel model = build(network, cand, cand.length / 2, false);
+        model.selfCheck(network);
+        return model;
+    }
+
+    /**
+     * The model of {@code network}, a network of the same circuit structure as this model's (the same
+     * branches, only other element values: the solver's neighbouring banks), found with this model's poles
+     * as Newton's first guesses instead of the eigenvalue search. The warm start is taken only when every
+     * guess converges to its own zero of Y, the zeros found number the circuit's degree (the count of
+     * finite eigenvalues of the pencil, which for positive elements depends on the structure alone) and the
+     * self-checks pass; otherwise, or when the structures differ, the result is {@link #of(PowerNetwork)}.
+     * Either way the poles are Newton-polished zeros of the same Y, so the two agree to rounding.
+     *
+     * @throws ModelException as {@link #of(PowerNetwork)}
+     */
+    public PoleResidueModel near(PowerNetwork network) {
+        long[] shape = structure(network);
+        if (java.util.Arrays.equals(shape, structure) && weightedCount() == degree && modes > 0) {
+            double[] cand = new double[2 * modes];
+            for (int k = 0; k < modes; k++) {
+                cand[2 * k] = pr[k];
+                cand[2 * k + 1] = pi[k];
+            }
+            try {
+                PoleResidueModel model = build(network, cand, degree, true);
+                if (model.weightedCount() == degree) {
+                    model.selfCheck(network);
+                    model.warmStarted = true;
+                    return model;
+                }
+            } catch (ModelException notFromHere) {
+                // fall through: the eigenvalue search decides
+            }
+        }
+        return of(network);
+    }
+
+    /** Whether this model's poles were found from a neighbour's ({@link #near}), not by the eigenvalue search. */
+    public boolean warmStarted() {
+        return warmStarted;
+    }
+
+    /** Number of poles, each conjugate counted. */
+    private int weightedCount() {
+        int c = 0;
+        for (int k = 0; k < modes; k++) {
+            c += (int) weight[k];
+        }
+        return c;
+    }
+
+    /**
+     * Poles polished from first guesses {@code cand} (interleaved re/im; guesses with Im &lt; 0 are left to
+     * their conjugates), residues, ordering and the damping check; no self-check. With {@code retry} (first
+     * guesses from a neighbour's poles, where every guess should find a zero), guesses that found none or
+     * one already found are tried again by Newton's method with implicit deflation of the zeros found
+     * (Maehly's correction), which cannot return to those; each zero so found is polished on Y itself.
+     */
+    private static PoleResidueModel build(PowerNetwork network, double[] cand, int degree, boolean retry) {
+        Ladder ladder = new Ladder(network);
         int nc = cand.length / 2;
         double[] pr = new double[nc];
         double[] pi = new double[nc];
@@ -97,44 +165,65 @@ public final class PoleResidueModel {
         double[] ri = new double[nc];
         double[] root = new double[2];
         int m = 0;
-        for (int c = 0; c < nc; c++) {
-            double sr = cand[2 * c];
-            double si = cand[2 * c + 1];
-            if (si < 0) {
-                continue; // the conjugate is handled with its partner
+        int[] missed = new int[nc];
+        int nm = 0;
+        int weighted = 0;
+        for (int pass = 0; pass < 2; pass++) {
+            int count = pass == 0 ? nc : nm;
+            if (pass == 1 && !(retry && weighted < degree)) {
+                break;
             }
-            if (!newton(ladder, sr, si, root)) {
-                continue;
-            }
-            double qr = root[0];
-            double qi = root[1];
-            if (Math.abs(qi) <= 1e-9 * Math.hypot(qr, qi)) {
-                if (!newton(ladder, qr, 0.0, root)) {
+            for (int g = 0; g < count && (pass == 0 || weighted < degree); g++) {
+                int c = pass == 0 ? g : missed[g];
+                double sr = cand[2 * c];
+                double si = cand[2 * c + 1];
+                if (si < 0) {
+                    continue; // the conjugate is handled with its partner
+                }
+                if (pass == 1) {
+                    if (!deflatedNewton(ladder, sr, si, pr, pi, m, root)) {
+                        continue;
+                    }
+                    sr = root[0];
+                    si = root[1];
+                }
+                if (!newton(ladder, sr, si, root)) {
+                    missed[nm++] = c;
                     continue;
                 }
-                qr = root[0];
-                qi = 0.0;
-            } else if (qi < 0) {
-                qi = -qi; // Newton went to the conjugate root: store the upper one
-            }
-            boolean duplicate = false;
-            for (int k = 0; k < m; k++) {
-                if (Math.hypot(pr[k] - qr, pi[k] - qi) <= 1e-7 * Math.hypot(qr, qi)) {
-                    duplicate = true;
-                    break;
+                double qr = root[0];
+                double qi = root[1];
+                if (Math.abs(qi) <= 1e-9 * Math.hypot(qr, qi)) {
+                    if (!newton(ladder, qr, 0.0, root)) {
+                        missed[nm++] = c;
+                        continue;
+                    }
+                    qr = root[0];
+                    qi = 0.0;
+                } else if (qi < 0) {
+                    qi = -qi; // Newton went to the conjugate root: store the upper one
                 }
-            }
-            if (duplicate) {
-                continue;
-            }
-            ladder.eval(qr, qi);
+                boolean duplicate = false;
+                for (int k = 0; k < m; k++) {
+                    if (Math.hypot(pr[k] - qr, pi[k] - qi) <= 1e-7 * Math.hypot(qr, qi)) {
+                        duplicate = true;
+                        break;
+                    }
+                }
+                if (duplicate) {
+                    missed[nm++] = c;
+                    continue;
+                }
+                ladder.eval(qr, qi);
             // r = 1/Y'(p)
             double dm = 1.0 / (ladder.dr * ladder.dr + ladder.di * ladder.di);
             pr[m] = qr;
             pi[m] = qi;
-            rr[m] = ladder.dr * dm;
-            ri[m] = qi == 0.0 ? 0.0 : -ladder.di * dm;
-            m++;
+                rr[m] = ladder.dr * dm;
+                ri[m] = qi == 0.0 ? 0.0 : -ladder.di * dm;
+                m++;
+                weighted += qi == 0.0 ? 1 : 2;
+            }
         }
         // order by |p| descending
         for (int i = 1; i < m; i++) {
@@ -156,10 +245,32 @@ public final class PoleResidueModel {
             }
         }
         double[] asym = highFrequencyLimit(network);
-        PoleResidueModel model = new PoleResidueModel(m, trim(pr, m), trim(pi, m), trim(rr, m), trim(ri, m), w,
-                asym[0], asym[1], asym[2], network.dcResistanceOhms());
-        model.selfCheck(network);
-        return model;
+        return new PoleResidueModel(m, trim(pr, m), trim(pi, m), trim(rr, m), trim(ri, m), w,
+                asym[0], asym[1], asym[2], network.dcResistanceOhms(), degree, structure(network));
+    }
+
+    /**
+     * The circuit's structure: branch counts, whether there is a package, and which elements are zero.
+     * Two networks with equal structures have the same degree.
+     */
+    static long[] structure(PowerNetwork net) {
+        List<SeriesBranch> board = net.boardBranches();
+        List<SeriesBranch> load = net.loadBranches();
+        int n = board.size() + load.size();
+        long[] s = new long[2 + (n * 3 + 63) / 64];
+        s[0] = ((long) board.size() << 32) | load.size();
+        s[1] = (net.hasPackage() ? 1 : 0) | (net.regulatorInductanceH() > 0 ? 2 : 0)
+                | (net.regulatorResistanceOhms() > 0 ? 4 : 0) | (net.packageInductanceH() > 0 ? 8 : 0)
+                | (net.packageResistanceOhms() > 0 ? 16 : 0);
+        int bit = 0;
+        for (int k = 0; k < n; k++) {
+            SeriesBranch b = k < board.size() ? board.get(k) : load.get(k - board.size());
+            long flags = (b.resistanceOhms() > 0 ? 1 : 0) | (b.inductanceH() > 0 ? 2 : 0)
+                    | (b.capacitanceF() > 0 ? 4 : 0);
+            s[2 + bit / 64] |= flags << (bit % 64);
+            bit += 3;
+        }
+        return s;
     }
 
     // ---- accessors --------------------------------------------------------------------------------
@@ -318,6 +429,54 @@ public final class PoleResidueModel {
         out[0] = sr;
         out[1] = si;
         return true;
+    }
+
+    /**
+     * Newton's method on Y(s)/Π(s − z_k) over the zeros z_k found so far and their conjugates: the step
+     * Y/(Y' − Y·Σ 1/(s − z_k)) (Maehly's correction) keeps it away from them. Succeeds when the step falls
+     * below 1e-10·|s|, leaving the point (to be polished on Y itself) in {@code out}.
+     */
+    static boolean deflatedNewton(Ladder ladder, double sr, double si, double[] zr, double[] zi, int m,
+                                  double[] out) {
+        for (int it = 0; it < 60; it++) {
+            ladder.eval(sr, si);
+            double yr = ladder.yr;
+            double yi = ladder.yi;
+            // Σ 1/(s − z) over the found zeros and their conjugates
+            double sumR = 0;
+            double sumI = 0;
+            for (int k = 0; k < m; k++) {
+                double ar = sr - zr[k];
+                double ai = si - zi[k];
+                double d = ar * ar + ai * ai;
+                sumR += ar / d;
+                sumI -= ai / d;
+                if (zi[k] != 0.0) {
+                    double br = sr - zr[k];
+                    double bi = si + zi[k];
+                    double e = br * br + bi * bi;
+                    sumR += br / e;
+                    sumI -= bi / e;
+                }
+            }
+            // den = Y' − Y·sum
+            double dr = ladder.dr - (yr * sumR - yi * sumI);
+            double di = ladder.di - (yr * sumI + yi * sumR);
+            double dm = dr * dr + di * di;
+            if (!(dm > 0) || !Double.isFinite(dm) || !Double.isFinite(yr) || !Double.isFinite(yi)) {
+                return false;
+            }
+            double xr = (yr * dr + yi * di) / dm;
+            double xi = (yi * dr - yr * di) / dm;
+            sr -= xr;
+            si -= xi;
+            if (Math.hypot(xr, xi) <= 1e-10 * Math.hypot(sr, si)) {
+                out[0] = sr;
+                out[1] = Math.abs(si) <= 1e-9 * Math.hypot(sr, si) ? 0.0 : si;
+                return true;
+            }
+        }
+        return false;
     }
 
     /**
