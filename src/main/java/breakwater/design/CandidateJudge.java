@@ -57,10 +57,21 @@ public final class CandidateJudge {
                 }
             };
     static final int RECENT_MODELS = 256;
+    private final boolean warmStart;
     private long models;
     private long warmStarts;
 
     public CandidateJudge(BankEvaluator evaluator, List<Part> candidates) {
+        this(evaluator, candidates, true);
+    }
+
+    /**
+     * @param warmStart whether a bank's poles may start from those of the last bank with the same parts
+     *                  ({@link PoleResidueModel#near}); false builds every model by the eigenvalue search
+     *                  (the same figures to rounding, slower: for benchmarks and cross-checks)
+     */
+    public CandidateJudge(BankEvaluator evaluator, List<Part> candidates, boolean warmStart) {
+        this.warmStart = warmStart;
         this.evaluator = evaluator;
         this.candidates = List.copyOf(candidates);
         Scenario s = evaluator.scenario();
@@ -171,7 +182,7 @@ public final class CandidateJudge {
         double targetExcess = s.requireTarget() ? Math.max(0, peak * (1 + TARGET_GUARD) / target - 1) : 0;
         WorstCaseFigures wc;
         try {
-            PoleResidueModel near = recentModels.get(used);
+            PoleResidueModel near = warmStart ? recentModels.get(used) : null;
             PoleResidueModel model = near != null ? near.near(network) : PoleResidueModel.of(network);
             recentModels.put(used, model);
             models++;

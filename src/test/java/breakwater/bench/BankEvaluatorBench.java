@@ -31,7 +31,9 @@ import java.util.concurrent.TimeUnit;
 /**
  * The solver's judge of one bank (impedance on the solver grid, exact worst case, cost, board limits) on
  * an eight-part-type bank with regulator, plane, package and die: once with ideal load edges, once with a
- * 1 ns edge time. Single thread. Run: {@code ./mvnw -B -Pbench -DskipTests verify -Dbench.args=BankEvaluator}.
+ * 1 ns edge time. Single thread. Successive calls judge neighbouring banks (one count changes), as the
+ * solver does, so the poles warm-start from the last bank's; {@code idealEdgesColdStart} measures the same
+ * banks with every model from the eigenvalue search. Run: {@code ./mvnw -B -Pbench -DskipTests verify -Dbench.args=BankEvaluator}.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.Throughput)
@@ -51,6 +53,7 @@ public class BankEvaluatorBench {
     static final int[] COUNTS = {3, 2, 1, 8, 1, 12, 25, 30};
 
     CandidateJudge ideal;
+    CandidateJudge idealCold;
     CandidateJudge edged;
     int flip;
 
@@ -64,6 +67,7 @@ public class BankEvaluatorBench {
     @Setup
     public void setUp() throws Exception {
         ideal = new CandidateJudge(new BankEvaluator(scenario(0), Optional.empty()), PARTS);
+        idealCold = new CandidateJudge(new BankEvaluator(scenario(0), Optional.empty()), PARTS, false);
         edged = new CandidateJudge(new BankEvaluator(scenario(1e-9), Optional.empty()), PARTS);
     }
 
@@ -77,6 +81,12 @@ public class BankEvaluatorBench {
     @Benchmark
     public Judgement idealEdges() {
         return ideal.judge(next());
+    }
+
+    /** As {@link #idealEdges}, every model from the eigenvalue search (no warm start from the last bank). */
+    @Benchmark
+    public Judgement idealEdgesColdStart() {
+        return idealCold.judge(next());
     }
 
     @Benchmark
