@@ -104,7 +104,8 @@ public final class BankFileReader {
                 int column = row.size() > width ? row.cell(width).column() : row.endColumn();
                 problems.error(source, row.line(), column, "this row has " + row.size() + " field"
                         + (row.size() == 1 ? "" : "s") + " but the header names " + width
-                        + " columns, every row needs a part and a count");
+                        + " columns, every row needs a part and a count"
+                        + (row.size() > width ? row.decimalCommaHint() : ""));
                 continue;
             }
             CsvTable.Cell partCell = row.cell(partIndex);

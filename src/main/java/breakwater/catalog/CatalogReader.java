@@ -137,7 +137,8 @@ public final class CatalogReader {
             problems.error(source, row.line(), column, "this row has " + row.size() + " field"
                     + (row.size() == 1 ? "" : "s") + " but the header names " + width
                     + " columns, every row needs one field per column (leave optional ones empty"
-                    + " between commas)");
+                    + " between commas)"
+                    + (row.size() > width ? row.decimalCommaHint() : ""));
             return Optional.empty();
         }
         RowReader r = new RowReader(row, columns, source, problems);

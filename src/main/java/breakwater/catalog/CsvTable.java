@@ -37,6 +37,24 @@ final class CsvTable {
         Cell cell(int index) {
             return cells.get(index);
         }
+
+        /**
+         * For a row with more fields than the header: a hint when two neighbouring fields look like one
+         * number split at a decimal comma ("4,7u" read as "4" and "7u"), else empty.
+         */
+        String decimalCommaHint() {
+            for (int k = 0; k + 1 < cells.size(); k++) {
+                Cell a = cells.get(k);
+                Cell b = cells.get(k + 1);
+                boolean adjacent = a.line() == b.line() && b.column() == a.column() + a.value().length() + 1;
+                if (adjacent && a.value().matches("[+-]?\\d+") && b.value().matches("\\d.*")) {
+                    String joined = a.value() + "," + b.value();
+                    return "; '" + joined + "' looks like a number with a decimal comma: numbers use a point ("
+                            + a.value() + "." + b.value() + ")";
+                }
+            }
+            return "";
+        }
     }
 
     private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder()

@@ -90,6 +90,15 @@ class CatalogReaderTest {
     }
 
     @Test
+    void decimalCommaIsNamedNotJustCounted() {
+        // "4,7u" splits into two fields in a CSV; the message says why the row is too long
+        String p = onlyProblem(HEADER + "A,4,7u,10m,0.5n,0.3n,0.01\n");
+        assertThat(p).contains("has 7 fields", "'4,7u' looks like a number with a decimal comma", "(4.7u)");
+        // an ordinary extra field gets no such hint
+        assertThat(onlyProblem(HEADER + "A,1u,10m,0.5n,0.3n,0.01,extra\n")).doesNotContain("decimal comma");
+    }
+
+    @Test
     void emptyFileIsLocatedAtItsStart() {
         assertThat(onlyProblem("")).startsWith("parts.csv:1:1: ").contains("empty", "header row");
         assertThat(onlyProblem("# only a comment\n\n")).startsWith("parts.csv:1:1: ").contains("empty");
