@@ -52,6 +52,12 @@ public final class Main implements Runnable {
         cl.setErr(new PrintWriter(err, true, StandardCharsets.UTF_8));
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setUsageHelpWidth(110); // descriptions are written for this width; no re-wrapping
+        // compare takes --footprints (plural); the shared --footprint stays parsable, for its helpful
+        // refusal, but is not offered in compare's help
+        CommandLine.Model.CommandSpec compare = cl.getSubcommands().get("compare").getCommandSpec();
+        CommandLine.Model.OptionSpec single = compare.findOption("--footprint");
+        compare.remove(single);
+        compare.addOption(single.toBuilder().hidden(true).build());
         cl.setExitCodeExceptionMapper(Main::exitCodeFor);
         cl.setParameterExceptionHandler((ex, a) -> {
             CommandLine c = ex.getCommandLine();

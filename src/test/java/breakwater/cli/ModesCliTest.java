@@ -214,6 +214,18 @@ class ModesCliTest {
     }
 
     @Test
+    void compareOffersOnlyThePluralFootprintOption() {
+        CliTest.Run help = run("compare", "--help");
+        assertThat(help.code()).isEqualTo(ExitCodes.OK);
+        assertThat(help.out()).contains("--footprints=A,B").doesNotContain("--footprint=");
+        CliTest.Run single = run("compare", SMALL.toString(), "--footprint", "via-in-pad");
+        assertThat(single.code()).isEqualTo(ExitCodes.USAGE);
+        assertThat(single.err()).contains("--footprints A,B,... (plural)");
+        // the other commands still offer it
+        assertThat(run("check", "--help").out()).contains("--footprint=NAME");
+    }
+
+    @Test
     void frontierIsMonotoneAndEndsAtTheSpec(@TempDir Path dir) throws IOException {
         Path out = dir.resolve("fr");
         CliTest.Run r = run(args("frontier", SMALL.toString(), "--points", "4", "--out", out.toString()));
