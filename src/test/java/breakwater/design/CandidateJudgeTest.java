@@ -26,6 +26,37 @@ class CandidateJudgeTest {
             new Part("hf", "", "0402", "X7R", 100e-9, 35e-3, 0.35e-9, 0.45e-9, 0.002, Double.NaN, Double.NaN, 0.95, -1),
             new Part("tiny", "", "0201", "X5R", 100e-9, 55e-3, 0.18e-9, 0.35e-9, 0.003, Double.NaN, Double.NaN, 0.85, -1));
 
+    /**
+     * The judge's warm start (poles from the last bank with the same parts) against the judge that builds
+     * every model by the eigenvalue search, over a walk of neighbouring banks as the solver makes them.
+     */
+    @Test
+    void warmStartedJudgementsEqualColdOnes() throws Exception {
+        var scenario = Fixtures.scenario()
+                .rail(new Rail("r", 0.9, 0.03, 5, 2.5, 0))
+                .plane(new Plane(5e-9, 0.4e-3))
+                .packagePath(PackagePath.of(0.3e-3, 10e-12))
+                .die(new Die(600e-9, 4e-3))
+                .build();
+        BankEvaluator ev = new BankEvaluator(scenario, Optional.empty());
+        CandidateJudge warm = new CandidateJudge(ev, PARTS);
+        CandidateJudge cold = new CandidateJudge(ev, PARTS, false);
+        Random rnd = new Random(12);
+        int[] counts = {2, 3, 8, 10, 6};
+        for (int step = 0; step < 200; step++) {
+            int i = rnd.nextInt(counts.length);
+            counts[i] = Math.max(0, counts[i] + rnd.nextInt(5) - 2);
+            Judgement a = warm.judge(counts);
+            Judgement b = cold.judge(counts);
+            assertThat(a.droopV()).isCloseTo(b.droopV(), within(1e-12));
+            assertThat(a.overshootV()).isCloseTo(b.overshootV(), within(1e-12));
+        }
+        assertThat(cold.modelStarts()[1]).isZero();
+        assertThat(warm.modelStarts()[0]).isEqualTo(200);
+        // most steps keep the same part types, and those start warm
+        assertThat(warm.modelStarts()[1]).isGreaterThan(100);
+    }
+
     @Test
     void fastJudgeAgreesWithTheFullEvaluation() throws Exception {
         var scenario = Fixtures.scenario()
