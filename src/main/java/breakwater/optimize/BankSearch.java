@@ -34,13 +34,15 @@ import java.util.concurrent.atomic.AtomicBoolean;
 /**
  * Searches part counts for the cheapest bank that meets the rail's spec, with Timefold local search.
  *
- * <p>Each solver starts from the given bank (empty by default), so the construction heuristic has
- * nothing to do, and runs late acceptance over four kinds of move: the solver's change (any count in
- * range) and swap (two types exchange counts) moves, and {@link CountMoves} (nudge a count by ±1/±3,
- * replace a type by its neighbouring value). Several solvers with seeds seed, seed+1, … run in parallel
- * and the best is kept (ties go to the lowest seed, so a move-limited run is reproducible). Without a
- * move limit each thread restarts from the best bank so far with a fresh seed whenever its solver stops
- * improving, until the time limit.
+ * <p>Each solver starts from the given bank (or the impedance-shaped start), fills it greedily while it
+ * fails ({@link GreedyFill}), then runs tabu search over the solver's change (any count in range) and
+ * swap (two types exchange counts) moves and {@link CountMoves} (nudge a count by ±1/±3, drop a type,
+ * move one part between types, replace a type by its neighbouring value). Several solvers with seeds
+ * seed, seed+1, … run in parallel and the best is kept (ties go to the lowest seed, so a move-limited
+ * run is reproducible). Without a move limit each thread restarts whenever its solver stops improving,
+ * until the time limit: alternately from the best bank so far, and from that bank partly taken apart
+ * (one part type removed, another halved) for the greedy fill to rebuild, which lets the search leave a
+ * basin that single moves cannot (ruin and recreate).
  *
  * <p>No Timefold type appears in this class's public API.
  */
@@ -214,8 +216,35 @@ public final class BankSearch {
             synchronized (this) {
                 from = bestCounts.clone();
             }
+            if (round % 2 == 0) {
+                from = ruin(from, new java.util.Random(seed));
+            }
         }
         return bestPlan != null ? bestPlan : problem(start);
+    }
+
+    /**
+     * The bank partly taken apart: one part type in use removed and, when another remains, that one
+     * halved (rounded down). Unchanged when no part is in use.
+     */
+    static int[] ruin(int[] counts, java.util.Random rnd) {
+        int[] c = counts.clone();
+        List<Integer> used = new ArrayList<>();
+        for (int i = 0; i < c.length; i++) {
+            if (c[i] > 0) {
+                used.add(i);
+            }
+        }
+        if (used.isEmpty()) {
+            return c;
+        }
+        int drop = used.remove(rnd.nextInt(used.size()));
+        c[drop] = 0;
+        if (!used.isEmpty()) {
+            int halve = used.get(rnd.nextInt(used.size()));
+            c[halve] /= 2;
+        }
+        return c;
     }
 
     private synchronized void offer(int[] counts) {

@@ -131,4 +131,30 @@ class BankSearchTest {
                 .solve(new BankPlan(new JudgePool(ev, PARTS), counts));
         assertThat(solved.getScore()).isNotNull();
     }
+
+    /** The restart's perturbation: exactly one type in use goes to zero and one other is halved. */
+    @Test
+    void ruinRemovesOneTypeAndHalvesAnother() {
+        java.util.Random rnd = new java.util.Random(5);
+        int[] bank = {0, 7, 3, 0, 10, 1};
+        for (int t = 0; t < 200; t++) {
+            int[] r = BankSearch.ruin(bank, rnd);
+            int zeroed = 0;
+            int halved = 0;
+            for (int i = 0; i < bank.length; i++) {
+                if (bank[i] == 0) {
+                    assertThat(r[i]).isZero();
+                } else if (r[i] == 0) {
+                    zeroed++; // a count of 1 halved also reaches 0
+                } else if (r[i] != bank[i]) {
+                    assertThat(r[i]).isEqualTo(bank[i] / 2);
+                    halved++;
+                }
+            }
+            assertThat(zeroed + halved).isBetween(1, 2);
+            assertThat(zeroed).isGreaterThanOrEqualTo(1);
+        }
+        assertThat(BankSearch.ruin(new int[] {0, 0}, rnd)).containsExactly(0, 0);
+        assertThat(BankSearch.ruin(new int[] {0, 4}, rnd)).containsExactly(0, 0);
+    }
 }
