@@ -40,9 +40,10 @@ import java.util.concurrent.atomic.AtomicBoolean;
  * move one part between types, replace a type by its neighbouring value). Several solvers with seeds
  * seed, seed+1, … run in parallel and the best is kept (ties go to the lowest seed, so a move-limited
  * run is reproducible). Without a move limit each thread restarts whenever its solver stops improving,
- * until the time limit: alternately from the best bank so far, and from that bank partly taken apart
+ * until the time limit: alternately from its own best bank so far, and from that bank partly taken apart
  * (one part type removed, another halved) for the greedy fill to rebuild, which lets the search leave a
- * basin that single moves cannot (ruin and recreate).
+ * basin that single moves cannot (ruin and recreate). Threads keep to their own best so that they
+ * explore different basins; the best over all threads is returned.
  *
  * <p>No Timefold type appears in this class's public API.
  */
@@ -174,8 +175,9 @@ public final class BankSearch {
 
     /**
      * One solver thread: a first solve from the start; then, without a move limit and while time is left,
-     * restarts from the best bank found so far (by any thread) with a fresh seed, each ending when it has
-     * not improved for the unimproved limit. Restarts diversify where one long tabu walk would circle.
+     * restarts with a fresh seed from this thread's best bank, on every other round partly taken apart
+     * ({@link #ruin}), each ending when it has not improved for the unimproved limit. Restarts diversify
+     * where one long tabu walk would circle.
      */
     private BankPlan worker(int k, SearchSettings settings, int[] start) {
         long deadline = startNanos + settings.timeLimit().toNanos();
@@ -213,9 +215,7 @@ public final class BankSearch {
             if (settings.moveLimit() > 0) {
                 break; // a move-limited run is one solve per thread, so it stays reproducible
             }
-            synchronized (this) {
-                from = bestCounts.clone();
-            }
+            from = bestPlan.countVector();
             if (round % 2 == 0) {
                 from = ruin(from, new java.util.Random(seed));
             }
