@@ -4,13 +4,20 @@ import breakwater.catalog.Part;
 import breakwater.design.BankEvaluator;
 import breakwater.design.CapacitorBank;
 import breakwater.design.Evaluation;
+import breakwater.design.Limits;
 import breakwater.optimize.BankSearch;
 import breakwater.optimize.MaxCounts;
 import breakwater.optimize.SearchResult;
 import breakwater.optimize.SearchSettings;
+import breakwater.report.ReportModel;
+import breakwater.units.EngineeringNotation;
+import breakwater.units.NotationException;
+import breakwater.units.Quantity;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
@@ -20,6 +27,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
+import static breakwater.units.EngineeringNotation.format;
+import static breakwater.units.Quantity.VOLTAGE;
 
 /** {@code breakwater solve SCENARIO}: searches for the cheapest bank that meets the spec. */
 @Command(name = "solve", mixinStandardHelpOptions = true,
@@ -53,14 +62,73 @@ final class SolveCommand implements Callable<Integer> {
     @Mixin
     MonteCarloOptions monteCarlo;
 
+    @Option(names = "--margin", paramLabel = "VOLTAGE", converter = VoltageConverter.class,
+            description = "Keep the worst case at least this far inside the tolerance band on both sides "
+                    + "(e.g. 1mV): a design margin for part spread and model error. Default: none.")
+    Double marginV;
+
+    /** Parses a voltage in engineering notation ("1 mV", "0.5m", "1e-3"). */
+    static final class VoltageConverter implements CommandLine.ITypeConverter<Double> {
+        @Override
+        public Double convert(String value) {
+            double v;
+            try {
+                v = EngineeringNotation.parse(value, Quantity.VOLTAGE);
+            } catch (NotationException e) {
+                throw new CommandLine.TypeConversionException(e.getMessage());
+            }
+            if (!(v >= 0)) {
+                throw new CommandLine.TypeConversionException("a margin must be at least 0 V, got '" + value + "'");
+            }
+            return v;
+        }
+    }
+
+    /**
+     * The judge the search uses with --margin: the tolerance band narrowed by the margin on both sides. A
+     * margin that leaves no room on one side is a usage error that says how much room there is.
+     */
+    static BankEvaluator narrowed(BankEvaluator spec, double marginV) {
+        Limits band = spec.limits();
+        double op = spec.operatingPointV();
+        double below = op - band.lowerV();
+        double above = band.upperV() - op;
+        if (!(marginV < below && marginV < above)) {
+            throw new UsageException(String.format(Locale.ROOT, "--margin %s leaves no room: from the %s operating "
+                            + "point the tolerance band allows %s of droop and %s of overshoot; choose a margin below %s",
+                    format(marginV, VOLTAGE), format(op, VOLTAGE, 5), format(below, VOLTAGE), format(above, VOLTAGE),
+                    format(Math.min(below, above), VOLTAGE)));
+        }
+        return spec.withLimits(new Limits(band.lowerV() + marginV, band.upperV() - marginV));
+    }
+
+    /** The margin the run asked for: summary key, console line, report section, and its condition for exit 0. */
+    static RunExtras marginExtras(Evaluation e, double marginV) {
+        double kept = e.figures().marginV();
+        // the search judged the same worst case (to rounding): allow a nanovolt
+        boolean met = kept >= marginV - 1e-9;
+        String line = String.format(Locale.ROOT, "Margin     %s required inside the tolerance band (--margin), %s kept: %s",
+                format(marginV, VOLTAGE), format(kept, VOLTAGE), met ? "met" : "NOT MET");
+        String why = String.format(Locale.ROOT, "the margin kept (%s) is less than the %s required by --margin",
+                format(kept, VOLTAGE), format(marginV, VOLTAGE));
+        ReportModel.Section section = ReportModel.Section.text("Required margin", String.format(Locale.ROOT,
+                "The run asked for the worst-case droop and overshoot to stay at least %s inside the tolerance band "
+                        + "(--margin), as a design margin for part spread and model error. Margin kept: %s (%s).",
+                format(marginV, VOLTAGE), format(kept, VOLTAGE), met ? "met" : "not met"));
+        return RunExtras.of(List.of(section), summary -> summary.put("required_margin_v", marginV), line)
+                .withModeCondition(met, why);
+    }
+
     @Override
     public Integer call() throws Exception {
         Inputs in = Inputs.load(scenarioFile, output.footprint);
         BankEvaluator evaluator = new BankEvaluator(in.scenario(), in.footprint());
+        double margin = marginV == null ? 0 : marginV;
+        BankEvaluator searchJudge = margin > 0 ? narrowed(evaluator, margin) : evaluator;
         List<Part> candidates = in.catalog().parts();
         int[] max = MaxCounts.of(candidates, in.scenario());
         SearchSettings settings = search.settings(in.scenario());
-        BankSearch bankSearch = new BankSearch(evaluator, candidates, max);
+        BankSearch bankSearch = new BankSearch(searchJudge, candidates, max);
 
         PrintWriter err = spec.commandLine().getErr();
         if (!output.quiet) {
@@ -74,8 +142,11 @@ final class SolveCommand implements Callable<Integer> {
             SearchResult result = Searches.runWithProgress(bankSearch, settings, CapacitorBank.EMPTY, err, output.quiet,
                     evaluator);
             Evaluation e = evaluator.evaluate(result.bank());
-            RunExtras mc = monteCarlo.run(evaluator, e.bank(), in.scenario(), output.quiet, err);
-            return Results.emit("solve", in, output.footprint, evaluator, e, java.util.Optional.of(result), mc,
+            RunExtras extras = monteCarlo.run(evaluator, e.bank(), in.scenario(), output.quiet, err);
+            if (margin > 0) {
+                extras = extras.plus(marginExtras(e, margin));
+            }
+            return Results.emit("solve", in, output.footprint, evaluator, e, java.util.Optional.of(result), extras,
                     output, spec.commandLine().getOut(), err);
         }
     }

@@ -64,6 +64,38 @@ class ModesCliTest {
     }
 
     @Test
+    void solveWithAMarginKeepsIt(@TempDir Path dir) throws IOException {
+        Path out = dir.resolve("margin");
+        CliTest.Run r = run(args("solve", SMALL.toString(), "--margin", "10mV", "--out", out.toString()));
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("Margin     10 mV required inside the tolerance band (--margin)", ": met",
+                "MEETS SPEC");
+        JsonNode s = json(out.resolve("summary.json"));
+        assertThat(at(s, "required_margin_v").asDouble()).isEqualTo(0.01);
+        assertThat(at(s, "worst_case.margin_v").asDouble()).isGreaterThanOrEqualTo(0.01 - 1e-9);
+        assertThat(at(s, "meets_spec").asBoolean()).isTrue();
+        assertThat(Files.readString(out.resolve("report.html"))).contains("Required margin");
+    }
+
+    /**
+     * The worst droop is never below ΔI·Z(0) (the step response settles there; final value theorem): on the
+     * small rail 2 A × 0.5 mΩ = 1 mV, so a 48 mV margin, which leaves 1 mV of the 49 mV below the operating
+     * point, cannot be met; a margin of the whole allowance leaves no room at all.
+     */
+    @Test
+    void aMarginThatCannotBeKeptFailsTheRun() {
+        CliTest.Run r = run(args("solve", SMALL.toString(), "--margin", "48mV"));
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.SPEC_NOT_MET);
+        assertThat(r.out()).contains("NOT MET", "is less than the 48 mV required by --margin");
+        CliTest.Run none = run(args("solve", SMALL.toString(), "--margin", "60mV"));
+        assertThat(none.code()).isEqualTo(ExitCodes.USAGE);
+        assertThat(none.err()).contains("leaves no room", "choose a margin below 49 mV");
+        CliTest.Run unit = run(args("solve", SMALL.toString(), "--margin", "1mA"));
+        assertThat(unit.code()).isEqualTo(ExitCodes.USAGE);
+        assertThat(unit.err()).contains("is a current");
+    }
+
+    @Test
     void trimWritesSavingsChangesAndNeverLosesMargin(@TempDir Path dir) throws IOException {
         Path out = dir.resolve("trim");
         CliTest.Run r = run(args("trim", SMALL.toString(), "--out", out.toString()));
