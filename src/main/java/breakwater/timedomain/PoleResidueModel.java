@@ -188,14 +188,18 @@ public final class PoleResidueModel {
                     si = root[1];
                 }
                 if (!newton(ladder, sr, si, root)) {
-                    missed[nm++] = c;
+                    if (pass == 0) {
+                        missed[nm++] = c; // tried again once, in the second pass
+                    }
                     continue;
                 }
                 double qr = root[0];
                 double qi = root[1];
                 if (Math.abs(qi) <= 1e-9 * Math.hypot(qr, qi)) {
                     if (!newton(ladder, qr, 0.0, root)) {
-                        missed[nm++] = c;
+                        if (pass == 0) {
+                            missed[nm++] = c; // tried again once, in the second pass
+                        }
                         continue;
                     }
                     qr = root[0];
@@ -211,14 +215,16 @@ public final class PoleResidueModel {
                     }
                 }
                 if (duplicate) {
-                    missed[nm++] = c;
+                    if (pass == 0) {
+                        missed[nm++] = c; // tried again once, in the second pass
+                    }
                     continue;
                 }
                 ladder.eval(qr, qi);
-            // r = 1/Y'(p)
-            double dm = 1.0 / (ladder.dr * ladder.dr + ladder.di * ladder.di);
-            pr[m] = qr;
-            pi[m] = qi;
+                // r = 1/Y'(p)
+                double dm = 1.0 / (ladder.dr * ladder.dr + ladder.di * ladder.di);
+                pr[m] = qr;
+                pi[m] = qi;
                 rr[m] = ladder.dr * dm;
                 ri[m] = qi == 0.0 ? 0.0 : -ladder.di * dm;
                 m++;

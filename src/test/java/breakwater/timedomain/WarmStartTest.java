@@ -99,6 +99,43 @@ class WarmStartTest {
         }
     }
 
+    /**
+     * A hint from a network of the same structure but unrelated values (every element scaled at random by
+     * 0.1 … 10): most guesses fail, and the result is still the eigenvalue search's model.
+     */
+    @Test
+    void anUnrelatedHintOfTheSameStructureNeverChangesTheModel() {
+        Random rnd = new Random(23);
+        for (int t = 0; t < 200; t++) {
+            PowerNetwork a = Networks.random(rnd);
+            PowerNetwork b = scaledAtRandom(a, rnd);
+            assertSameModel(PoleResidueModel.of(a).near(b), PoleResidueModel.of(b));
+        }
+    }
+
+    static PowerNetwork scaledAtRandom(PowerNetwork n, Random rnd) {
+        List<SeriesBranch> board = new ArrayList<>();
+        for (SeriesBranch b : n.boardBranches()) {
+            board.add(scaled(b, rnd));
+        }
+        List<SeriesBranch> load = new ArrayList<>();
+        for (SeriesBranch b : n.loadBranches()) {
+            load.add(scaled(b, rnd));
+        }
+        return new PowerNetwork(n.regulatorResistanceOhms() * factor(rnd), n.regulatorInductanceH() * factor(rnd),
+                board, n.hasPackage(), n.packageResistanceOhms() * factor(rnd), n.packageInductanceH() * factor(rnd),
+                load);
+    }
+
+    static SeriesBranch scaled(SeriesBranch b, Random rnd) {
+        return new SeriesBranch(b.label(), b.resistanceOhms() * factor(rnd), b.inductanceH() * factor(rnd),
+                b.capacitanceF() * factor(rnd));
+    }
+
+    static double factor(Random rnd) {
+        return Math.pow(10, 2 * rnd.nextDouble() - 1);
+    }
+
     static int weighted(PoleResidueModel m) {
         int c = 0;
         for (int k = 0; k < m.modeCount(); k++) {
