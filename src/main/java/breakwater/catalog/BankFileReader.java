@@ -66,6 +66,10 @@ public final class BankFileReader {
             problems.throwIfAnyInFileOrder();
         }
         CsvTable table = read.orElseThrow();
+        if (!table.header.separatorProblem().isEmpty()) {
+            problems.error(source, table.header.line(), 1, table.header.separatorProblem());
+            problems.throwIfAnyInFileOrder();
+        }
 
         Map<String, Integer> columns = new HashMap<>();
         for (int k = 0; k < table.header.size(); k++) {

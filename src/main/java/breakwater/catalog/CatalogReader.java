@@ -80,6 +80,10 @@ public final class CatalogReader {
             problems.throwIfAnyInFileOrder();
         }
         CsvTable table = read.orElseThrow();
+        if (!table.header.separatorProblem().isEmpty()) {
+            problems.error(source, table.header.line(), 1, table.header.separatorProblem());
+            problems.throwIfAnyInFileOrder();
+        }
         Map<String, Integer> columns = readHeader(table.header, source, problems);
         boolean headerComplete = columns.keySet().containsAll(REQUIRED_COLUMNS);
 

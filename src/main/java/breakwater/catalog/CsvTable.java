@@ -39,6 +39,25 @@ final class CsvTable {
         }
 
         /**
+         * For a header read as a single field that holds semicolons or tabs: the message saying the file
+         * uses another separator (a spreadsheet's export in some locales), else empty.
+         */
+        String separatorProblem() {
+            if (cells.size() != 1) {
+                return "";
+            }
+            String v = cells.get(0).value();
+            for (String sep : new String[] {";", "\t"}) {
+                if (v.contains(sep)) {
+                    return "the header '" + v.replace("\t", "\\t") + "' is split by '" + (sep.equals(";") ? ";" : "\\t")
+                            + "', not by commas: this is a comma-separated file format (export or save it as CSV "
+                            + "with commas and decimal points)";
+                }
+            }
+            return "";
+        }
+
+        /**
          * For a row with more fields than the header: a hint when two neighbouring fields look like one
          * number split at a decimal comma ("4,7u" read as "4" and "7u"), else empty.
          */

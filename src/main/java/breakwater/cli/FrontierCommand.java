@@ -129,7 +129,7 @@ final class FrontierCommand implements Callable<Integer> {
         String asymmetric = Math.abs(droopAllowed - overAllowed) > 1e-12 ? String.format(Locale.ROOT,
                 "each limit holds both worst droop and worst overshoot, and never beyond the spec, which allows %s of "
                         + "droop and %s of overshoot from the %s operating point", format(droopAllowed, VOLTAGE),
-                format(overAllowed, VOLTAGE), format(op, VOLTAGE)) : "";
+                format(overAllowed, VOLTAGE), format(op, VOLTAGE, 5)) : "";
         if (!asymmetric.isEmpty()) {
             c.append(String.format(Locale.ROOT, "%-10s %s%n", "", asymmetric));
         }

@@ -80,7 +80,7 @@ final class Results {
                 bankVerdict = bankVerdict.replaceFirst("^MEETS SPEC", "The bank shown meets the spec; the run as a whole does not.");
             }
             out.println(bankVerdict);
-            marginNote(in, e).ifPresent(out::println);
+            marginNote(e, summary).ifPresent(out::println);
         }
         if (output.outDir().isPresent()) {
             OutputDirectory dir = new OutputDirectory(output.outDir().get());
@@ -98,11 +98,18 @@ final class Results {
             ReportModel model = meets || !built.verdict().meetsSpec() ? built : withVerdict(built,
                     new ReportModel.Verdict(false, "Does not meet the spec as a whole",
                             List.of(extras.modeVerdict().isEmpty() ? "see the mode's table below" : extras.modeVerdict())));
-            dir.write("impedance.svg", w -> w.write(Charts.impedanceChart(model.impedance())));
+            if (meets) {
+                // a pass on a thin margin says so in the report too, beside the verdict
+                ReportModel passed = model;
+                model = marginNote(e, summary).map(note -> withVerdict(passed, new ReportModel.Verdict(true,
+                        passed.verdict().headline(), List.of(note), true))).orElse(model);
+            }
+            ReportModel finalModel = model;
+            dir.write("impedance.svg", w -> w.write(Charts.impedanceChart(finalModel.impedance())));
             written.add("impedance.svg");
-            dir.write("worst-case.svg", w -> w.write(Charts.worstCaseChart(model.worstCase())));
+            dir.write("worst-case.svg", w -> w.write(Charts.worstCaseChart(finalModel.worstCase())));
             written.add("worst-case.svg");
-            dir.write("report.html", w -> HtmlReport.write(model, w));
+            dir.write("report.html", w -> HtmlReport.write(finalModel, w));
             written.add("report.html");
             dir.write("summary.json", w -> SummaryJson.write(summary, w));
             written.add("summary.json");
@@ -124,14 +131,23 @@ final class Results {
      * A bank that passes with a margin under 5 % of what the tolerance allows passes in the model only:
      * part-to-part spread alone can take it over. Say so, and how to check.
      */
-    static Optional<String> marginNote(Inputs in, Evaluation e) {
+    static Optional<String> marginNote(Evaluation e, ObjectNode summary) {
         var f = e.figures();
         double allowance = Math.min(f.operatingV() - f.lowerLimitV(), f.upperLimitV() - f.operatingV());
-        if (f.passes() && f.marginV() < 0.05 * allowance) {
-            return Optional.of(String.format(Locale.ROOT, "Note: the margin (%s) is under 5 %% of the allowance; part "
-                            + "tolerances can use it up. Check the yield with --monte-carlo 1000, and verify on hardware.",
-                    breakwater.units.EngineeringNotation.format(f.marginV(), breakwater.units.Quantity.VOLTAGE)));
+        if (!(f.passes() && f.marginV() < 0.05 * allowance)) {
+            return Optional.empty();
         }
-        return Optional.empty();
+        String margin = breakwater.units.EngineeringNotation.format(f.marginV(), breakwater.units.Quantity.VOLTAGE);
+        com.fasterxml.jackson.databind.JsonNode yield = summary.path("monte_carlo").path("yield");
+        if (yield.isNumber()) {
+            // the run drew the tolerances already: say what they did to it
+            return Optional.of(String.format(Locale.ROOT, "Note: the margin (%s) is under 5 %% of the allowance, and "
+                            + "with parts drawn within their tolerances %.1f %% of boards meet the spec (Monte Carlo "
+                            + "above)%s Verify on hardware.", margin, 100 * yield.asDouble(),
+                    yield.asDouble() < 0.99 ? ": ask for a design margin (solve --margin) or a flatter bank." : "."));
+        }
+        return Optional.of(String.format(Locale.ROOT, "Note: the margin (%s) is under 5 %% of the allowance; part "
+                + "tolerances can use it up. Check the yield with --monte-carlo 1000, ask for a design margin with "
+                + "solve --margin, and verify on hardware.", margin));
     }
 }

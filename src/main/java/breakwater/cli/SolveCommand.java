@@ -93,7 +93,8 @@ final class SolveCommand implements Callable<Integer> {
         double op = spec.operatingPointV();
         double below = op - band.lowerV();
         double above = band.upperV() - op;
-        if (!(marginV < below && marginV < above)) {
+        // a margin of the whole room (to rounding) leaves nothing to pass with
+        if (!(marginV < below * (1 - 1e-9) && marginV < above * (1 - 1e-9))) {
             throw new UsageException(String.format(Locale.ROOT, "--margin %s leaves no room: from the %s operating "
                             + "point the tolerance band allows %s of droop and %s of overshoot; choose a margin below %s",
                     format(marginV, VOLTAGE), format(op, VOLTAGE, 5), format(below, VOLTAGE), format(above, VOLTAGE),
@@ -139,8 +140,9 @@ final class SolveCommand implements Callable<Integer> {
             err.flush();
         }
         try (StopOnInterrupt guard = new StopOnInterrupt(bankSearch, err)) {
+            // progress in the search's own terms: with --margin, "allowed" is the narrowed band
             SearchResult result = Searches.runWithProgress(bankSearch, settings, CapacitorBank.EMPTY, err, output.quiet,
-                    evaluator);
+                    searchJudge);
             Evaluation e = evaluator.evaluate(result.bank());
             RunExtras extras = monteCarlo.run(evaluator, e.bank(), in.scenario(), output.quiet, err);
             if (margin > 0) {

@@ -81,6 +81,12 @@ final class TrimCommand implements Callable<Integer> {
         Path file = bankFile != null ? bankFile : in.scenario().existingBank().orElseThrow(() -> new UsageException(
                 "trim needs a bank to start from: give --bank FILE, or name one in the scenario's [existing] "
                         + "section (file = \"my-bank.csv\")"));
+        if (bankFile == null && !java.nio.file.Files.isRegularFile(file)) {
+            // named inside the scenario: the scenario is what is wrong (a missing --bank is an I/O error)
+            throw new breakwater.diagnostic.InputException(List.of(breakwater.diagnostic.Diagnostic.of(
+                    in.scenario().source(), "existing.file: bank file not found (looked for " + file + ")")
+                    .withHint("the path is relative to the scenario's folder; or give the bank with --bank FILE")));
+        }
         List<BankEntry> entries = BankFileReader.read(file, Inputs.display(file), in.catalog());
         CapacitorBank existing = new CapacitorBank(entries);
         BankEvaluator specJudge = new BankEvaluator(in.scenario(), in.footprint());
@@ -96,9 +102,11 @@ final class TrimCommand implements Callable<Integer> {
         if (!quiet) {
             err.printf(Locale.ROOT, "breakwater: trimming %s (%d parts, cost %s) keeping %s; searching %d parts for up "
                             + "to %s with %d solver%s, seed %d%s%n", Inputs.display(file), existing.totalParts(),
-                    Text.money(old.cost().total()), keep == CostDown.Keep.MARGIN
+                    Text.money(old.cost().total()), keep == CostDown.Keep.MARGIN && old.figures().passes()
                             ? "its worst droop " + format(old.figures().droopV(), VOLTAGE) + " and overshoot "
-                            + format(old.figures().overshootV(), VOLTAGE) + " (within the spec)" : "the spec",
+                            + format(old.figures().overshootV(), VOLTAGE) + " or better"
+                            : keep == CostDown.Keep.MARGIN ? "the spec (the existing bank itself misses it, so it has "
+                            + "no margin to keep)" : "the spec",
                     candidates.size(), Durations.describe(settings.timeLimit()), settings.solvers(),
                     settings.solvers() == 1 ? "" : "s", settings.seed(),
                     settings.moveLimit() > 0 ? ", move limit " + settings.moveLimit() : "");

@@ -36,6 +36,7 @@ public final class HtmlReport {
             .verdict.fail { border-color: var(--fail); background: #fbeeee; }
             .verdict strong { font-size: 16px; }
             .verdict.pass strong { color: var(--pass); }
+            .verdict.pass.thin { border-color: #c98a00; background: #fff8e5; }
             .verdict.fail strong { color: var(--fail); }
             .verdict ul { margin: 4px 0 0; padding-left: 20px; }
             dl.figures { display: grid; grid-template-columns: repeat(auto-fill, minmax(180px, 1fr)); gap: 8px;
@@ -164,7 +165,9 @@ public final class HtmlReport {
             b.append("<p class=\"sub\">").append(esc(line)).append("</p>\n");
         }
         var v = m.verdict();
-        b.append("<div id=\"verdict\" class=\"verdict ").append(v.meetsSpec() ? "pass" : "fail").append("\">\n<strong>")
+        // a pass with remarks (a thin margin) is drawn amber, not green
+        String kind = !v.meetsSpec() ? "fail" : v.thinMargin() ? "pass thin" : "pass";
+        b.append("<div id=\"verdict\" class=\"verdict ").append(kind).append("\">\n<strong>")
                 .append(v.meetsSpec() ? "&#10003; " : "&#10007; ").append(esc(v.headline())).append("</strong>\n");
         if (!v.reasons().isEmpty()) {
             b.append("<ul>\n");

@@ -51,11 +51,19 @@ public record ReportModel(
         cautions = List.copyOf(cautions);
     }
 
-    /** The design's verdict: {@code headline} such as "Meets the spec", with the reasons under it. */
-    public record Verdict(boolean meetsSpec, String headline, List<String> reasons) {
+    /**
+     * The design's verdict: {@code headline} such as "Meets the spec", with the reasons under it;
+     * {@code thinMargin}: it passes, but on a margin part spread can use up (drawn as a caution).
+     */
+    public record Verdict(boolean meetsSpec, String headline, List<String> reasons, boolean thinMargin) {
         public Verdict {
             requireText(headline, "verdict headline");
             reasons = List.copyOf(reasons);
+            require(meetsSpec || !thinMargin, "a thin margin belongs to a passing verdict");
+        }
+
+        public Verdict(boolean meetsSpec, String headline, List<String> reasons) {
+            this(meetsSpec, headline, reasons, false);
         }
     }
 

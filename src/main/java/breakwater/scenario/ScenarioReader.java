@@ -43,7 +43,7 @@ import java.util.regex.Pattern;
  * [cost]       placement, line_item, currency
  * [solver]     time_limit ("30 s", "2 min", "500 ms"; a number is seconds), seed
  * [objective]  require_target
- * [existing]   file (relative to the scenario's folder; must exist)
+ * [existing]   file (relative to the scenario's folder; read by trim, which reports it if missing)
  * </pre>
  * Physical values are TOML numbers in plain SI units or strings in engineering notation
  * ({@code "0.3 mOhm"}, {@code "4u7"}); fractions are ratios ({@code 0.03}) or percentages
@@ -488,7 +488,8 @@ public final class ScenarioReader {
             if (!has("existing", "file")) {
                 return "";
             }
-            return existingFile("existing", "file", "bank file").map(Path::toString).orElse("");
+            // checked when a command reads it (trim); check --bank and solve do not need it
+            return resolvedFile("existing", "file").map(Path::toString).orElse("");
         }
 
         // ---- values ----
@@ -531,20 +532,30 @@ public final class ScenarioReader {
             return Optional.of(Duration.ofNanos(nanos));
         }
 
-        private Optional<Path> existingFile(String section, String key, String what) {
+        /** The path of {@code section.key} resolved against the scenario's folder, whether or not it exists. */
+        private Optional<Path> resolvedFile(String section, String key) {
             List<String> path = List.of(section, key);
             JsonNode n = section(section).orElseThrow().get(key);
             if (!n.isTextual() || n.asText().isBlank()) {
                 valueError(path, section + "." + key + " must be a file path in double quotes");
                 return Optional.empty();
             }
-            Path resolved;
             try {
-                resolved = dir.resolve(n.asText()).normalize();
+                return Optional.of(dir.resolve(n.asText()).normalize());
             } catch (java.nio.file.InvalidPathException e) {
                 valueError(path, section + "." + key + " \"" + n.asText() + "\" is not a valid path");
                 return Optional.empty();
             }
+        }
+
+        private Optional<Path> existingFile(String section, String key, String what) {
+            List<String> path = List.of(section, key);
+            Optional<Path> found = resolvedFile(section, key);
+            if (found.isEmpty()) {
+                return found;
+            }
+            Path resolved = found.get();
+            JsonNode n = section(section).orElseThrow().get(key);
             if (!Files.isRegularFile(resolved)) {
                 valueError(path, what + " \"" + n.asText() + "\" not found (looked for " + resolved
                         + "), the path is relative to the scenario's folder");

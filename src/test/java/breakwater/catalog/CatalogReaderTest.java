@@ -99,6 +99,12 @@ class CatalogReaderTest {
     }
 
     @Test
+    void semicolonSeparatedFileIsNamedAsSuch() {
+        String p = onlyProblem("part;capacitance;esr;esl;mount_inductance;cost\nA;1u;10m;0.5n;0.3n;0,01\n");
+        assertThat(p).startsWith("parts.csv:1:1: ").contains("split by ';'", "comma-separated");
+    }
+
+    @Test
     void emptyFileIsLocatedAtItsStart() {
         assertThat(onlyProblem("")).startsWith("parts.csv:1:1: ").contains("empty", "header row");
         assertThat(onlyProblem("# only a comment\n\n")).startsWith("parts.csv:1:1: ").contains("empty");

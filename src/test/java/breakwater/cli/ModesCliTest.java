@@ -90,6 +90,9 @@ class ModesCliTest {
         CliTest.Run none = run(args("solve", SMALL.toString(), "--margin", "60mV"));
         assertThat(none.code()).isEqualTo(ExitCodes.USAGE);
         assertThat(none.err()).contains("leaves no room", "choose a margin below 49 mV");
+        // exactly the room below the operating point is no room either
+        CliTest.Run all = run(args("solve", SMALL.toString(), "--margin", "49mV"));
+        assertThat(all.code()).isEqualTo(ExitCodes.USAGE);
         CliTest.Run unit = run(args("solve", SMALL.toString(), "--margin", "1mA"));
         assertThat(unit.code()).isEqualTo(ExitCodes.USAGE);
         assertThat(unit.err()).contains("is a current");
@@ -155,6 +158,49 @@ class ModesCliTest {
         assertThat(at(s, "trim.savings").asDouble()).isEqualTo(0.0);
         assertThat(at(s, "trim.changes").size()).isZero();
         assertThat(r.code()).isEqualTo(ExitCodes.SPEC_NOT_MET);
+    }
+
+    @Test
+    void trimOfAFailingBankDoesNotCallItsMarginWithinTheSpec(@TempDir Path dir) throws IOException {
+        Path bank = dir.resolve("one.csv");
+        Files.writeString(bank, "part,count\nhf-100n,1\n");
+        CliTest.Run r = run(args("trim", SMALL.toString(), "--bank", bank.toString()));
+        assertThat(r.err()).contains("keeping the spec (the existing bank itself misses it, so it has no margin to keep)")
+                .doesNotContain("within the spec");
+    }
+
+    /** check --bank needs neither the scenario's [existing] file nor anything else trim would read. */
+    @Test
+    void checkWithABankIgnoresAMissingExistingFile(@TempDir Path dir) throws IOException {
+        Path scenario = dir.resolve("copied.toml");
+        Files.writeString(scenario, Files.readString(SMALL).replace("file = \"parts.csv\"",
+                "file = \"" + RAIL.resolve("parts.csv").toString().replace("\\", "/") + "\""));
+        CliTest.Run r = run("check", scenario.toString(), "--bank", EXISTING.toString(), "--quiet");
+        assertThat(r.code()).as(r.err()).isIn(ExitCodes.OK, ExitCodes.SPEC_NOT_MET);
+        // trim does need it, and says which file it looked for
+        CliTest.Run t = run(args("trim", scenario.toString()));
+        assertThat(t.code()).isEqualTo(ExitCodes.INVALID_INPUT);
+        assertThat(t.err()).contains("existing.file: bank file not found (looked for", "existing.bank.csv");
+    }
+
+    /** A pass on a thin margin says so in the report as well, and after a Monte Carlo run it gives the yield. */
+    @Test
+    void aThinMarginIsFlaggedInTheReportAndAnsweredByTheYield(@TempDir Path dir) throws IOException {
+        Path out = dir.resolve("thin");
+        CliTest.Run r = run(args("solve", SMALL.toString(), "--out", out.toString(), "--monte-carlo", "50"));
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        JsonNode s = json(out.resolve("summary.json"));
+        double margin = at(s, "worst_case.margin_v").asDouble();
+        double allowance = Math.min(at(s, "worst_case.operating_v").asDouble() - at(s, "worst_case.lower_limit_v").asDouble(),
+                at(s, "worst_case.upper_limit_v").asDouble() - at(s, "worst_case.operating_v").asDouble());
+        String html = Files.readString(out.resolve("report.html"));
+        if (margin < 0.05 * allowance) {
+            assertThat(r.out()).contains("of boards meet the spec (Monte Carlo above)");
+            assertThat(html).contains("verdict pass thin", "of boards meet the spec");
+        } else {
+            assertThat(r.out()).doesNotContain("Note: the margin");
+            assertThat(html).contains("verdict pass\"");
+        }
     }
 
     @Test

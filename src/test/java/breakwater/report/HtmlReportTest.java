@@ -82,6 +82,12 @@ class HtmlReportTest {
         Element v2 = XmlSupport.byId(XmlSupport.parse(html(failing)), "div", "verdict");
         assertThat(v2.getAttribute("class")).isEqualTo("verdict fail");
         assertThat(v2.getTextContent()).contains("Does not meet the spec");
+
+        ReportModel thin = with(m, m.title(), new Verdict(true, "Meets the spec",
+                List.of("Note: the margin (5 µV) is under 5 % of the allowance"), true), m.sections());
+        Element v3 = XmlSupport.byId(XmlSupport.parse(html(thin)), "div", "verdict");
+        assertThat(v3.getAttribute("class")).isEqualTo("verdict pass thin");
+        assertThat(v3.getTextContent()).contains("under 5 % of the allowance");
     }
 
     @Test
