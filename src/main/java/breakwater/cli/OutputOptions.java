@@ -7,9 +7,27 @@ import java.util.Optional;
 
 /** Options every command shares. */
 final class OutputOptions {
-    @Option(names = "--out", paramLabel = "DIR",
+    @Option(names = "--out", paramLabel = "DIR", converter = FolderConverter.class,
             description = "Write the result files (bom.csv, impedance.csv, summary.json, ...) into DIR.")
     Path out;
+
+    /** Refuses, before any work, an --out that names an existing file rather than a folder. */
+    static final class FolderConverter implements picocli.CommandLine.ITypeConverter<Path> {
+        @Override
+        public Path convert(String value) {
+            Path p;
+            try {
+                p = Path.of(value);
+            } catch (java.nio.file.InvalidPathException e) {
+                throw new picocli.CommandLine.TypeConversionException("'" + value + "' is not a valid path");
+            }
+            if (java.nio.file.Files.exists(p) && !java.nio.file.Files.isDirectory(p)) {
+                throw new picocli.CommandLine.TypeConversionException("'" + value + "' is a file, not a folder; "
+                        + "give a folder for the results (it is created if missing)");
+            }
+            return p;
+        }
+    }
 
     @Option(names = "--json", description = "Print summary.json to standard output instead of the text summary.")
     boolean json;

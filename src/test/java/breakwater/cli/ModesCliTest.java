@@ -169,6 +169,17 @@ class ModesCliTest {
                 .doesNotContain("within the spec");
     }
 
+    @Test
+    void anOutThatIsAFileIsRefusedBeforeAnyWork(@TempDir Path dir) throws IOException {
+        Path file = dir.resolve("notes.txt");
+        Files.writeString(file, "my own notes");
+        CliTest.Run r = run(args("solve", SMALL.toString(), "--out", file.toString()));
+        assertThat(r.code()).isEqualTo(ExitCodes.USAGE);
+        assertThat(r.err()).contains("is a file, not a folder");
+        assertThat(r.out()).isEmpty();
+        assertThat(Files.readString(file)).isEqualTo("my own notes");
+    }
+
     /** check --bank needs neither the scenario's [existing] file nor anything else trim would read. */
     @Test
     void checkWithABankIgnoresAMissingExistingFile(@TempDir Path dir) throws IOException {
