@@ -142,8 +142,8 @@ final class Results {
         if (yield.isNumber()) {
             // the run drew the tolerances already: say what they did to it
             return Optional.of(String.format(Locale.ROOT, "Note: the margin (%s) is under 5 %% of the allowance, and "
-                            + "with parts drawn within their tolerances %.1f %% of boards meet the spec (Monte Carlo "
-                            + "above)%s Verify on hardware.", margin, 100 * yield.asDouble(),
+                            + "with parts drawn within their tolerances %.1f %% of boards meet the spec (see the Monte "
+                            + "Carlo figures)%s Verify on hardware.", margin, 100 * yield.asDouble(),
                     yield.asDouble() < 0.99 ? ": ask for a design margin (solve --margin) or a flatter bank." : "."));
         }
         return Optional.of(String.format(Locale.ROOT, "Note: the margin (%s) is under 5 %% of the allowance; part "

@@ -206,7 +206,7 @@ class ModesCliTest {
                 at(s, "worst_case.upper_limit_v").asDouble() - at(s, "worst_case.operating_v").asDouble());
         String html = Files.readString(out.resolve("report.html"));
         if (margin < 0.05 * allowance) {
-            assertThat(r.out()).contains("of boards meet the spec (Monte Carlo above)");
+            assertThat(r.out()).contains("of boards meet the spec (see the Monte Carlo figures)");
             assertThat(html).contains("verdict pass thin", "of boards meet the spec");
         } else {
             assertThat(r.out()).doesNotContain("Note: the margin");
