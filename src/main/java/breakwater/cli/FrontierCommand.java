@@ -126,10 +126,13 @@ final class FrontierCommand implements Callable<Integer> {
         double op = f.points().get(0).evaluation().figures().operatingV();
         double droopAllowed = op - in.scenario().rail().lowerLimitV();
         double overAllowed = in.scenario().rail().upperLimitV() - op;
+        double offset = in.scenario().rail().currentStepA() * f.points().get(0).evaluation().network().dcResistanceOhms();
         String asymmetric = Math.abs(droopAllowed - overAllowed) > 1e-12 ? String.format(Locale.ROOT,
-                "each limit holds both worst droop and worst overshoot, and never beyond the spec, which allows %s of "
-                        + "droop and %s of overshoot from the %s operating point", format(droopAllowed, VOLTAGE),
-                format(overAllowed, VOLTAGE), format(op, VOLTAGE, 5)) : "";
+                "each limit holds both worst droop and worst overshoot; the spec allows %s of droop and %s of overshoot "
+                        + "from the %s operating point, and the worst overshoot is always the worst droop less "
+                        + "ΔI·Z(0) = %s, so the spec is met once the droop is within %s, where the limits end",
+                format(droopAllowed, VOLTAGE), format(overAllowed, VOLTAGE), format(op, VOLTAGE, 5),
+                format(offset, VOLTAGE), format(f.allowedV(), VOLTAGE)) : "";
         if (!asymmetric.isEmpty()) {
             c.append(String.format(Locale.ROOT, "%-10s %s%n", "", asymmetric));
         }

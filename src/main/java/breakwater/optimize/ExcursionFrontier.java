@@ -66,7 +66,7 @@ public final class ExcursionFrontier {
     /**
      * @param closest         the bank closest to an unreachable limit
      * @param tightestV       its worst excursion: the first limit
-     * @param allowedV        the spec's allowed excursion, max(V_op − V_low, V_high − V_op): the last limit
+     * @param allowedV        the spec's allowed excursion (see {@link #allowedExcursion}): the last limit
      * @param tightSeconds    time of the first search
      * @param points          tightest first
      */
@@ -89,11 +89,11 @@ public final class ExcursionFrontier {
             throw new IllegalArgumentException("a frontier needs at least 2 points, got " + points);
         }
         double op = spec.operatingPointV();
-        double allowed = Math.max(op - spec.limits().lowerV(), spec.limits().upperV() - op);
         BankEvaluator unreachable = judge(spec, UNREACHABLE_V);
         SearchResult tight = runner.run(new BankSearch(unreachable, candidates, maxCounts), unreachable, each,
                 CapacitorBank.EMPTY);
         Evaluation closest = spec.evaluate(tight.bank());
+        double allowed = allowedExcursion(spec, closest.network().dcResistanceOhms());
         double tightest = Math.max(closest.figures().droopV(), closest.figures().overshootV());
         double lo = Math.min(tightest, allowed);
         int k = lo < allowed ? points : 1;
@@ -137,6 +137,18 @@ public final class ExcursionFrontier {
             previous = found.bank();
         }
         return new Result(closest, tightest, allowed, tight.seconds(), out);
+    }
+
+    /**
+     * The largest limit that still means something: every bank's worst overshoot is its worst droop less
+     * ΔI·Z(0) (a pattern u and its mirror 1 − u give droop and overshoot that differ by exactly that), so a
+     * limit L on both is a limit on the droop alone, and the spec is met exactly when the droop is at most
+     * min(V_op − V_low, V_high − V_op + ΔI·Z(0)). Limits above that change nothing.
+     */
+    static double allowedExcursion(BankEvaluator spec, double dcResistanceOhms) {
+        double op = spec.operatingPointV();
+        double deltaI = spec.scenario().rail().currentStepA();
+        return Math.min(op - spec.limits().lowerV(), spec.limits().upperV() - op + deltaI * dcResistanceOhms);
     }
 
     /** The spec narrowed to at most {@code limitV} of droop and of overshoot around the operating point. */

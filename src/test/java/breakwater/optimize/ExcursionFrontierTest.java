@@ -39,9 +39,19 @@ class ExcursionFrontierTest {
         assertThat(f.points()).hasSize(5);
         assertThat(f.points().get(0).limitV()).isEqualTo(f.tightestV());
         assertThat(f.points().get(4).limitV()).isEqualTo(f.allowedV());
-        // the spec allows V_op - V_low below and V_high - V_op above; the last limit is the larger
+        // the spec allows V_op - V_low below and V_high - V_op above; since every worst overshoot is the worst
+        // droop less ΔI·Z(0) (u and its mirror 1 - u), the last useful limit is
+        // min(V_op - V_low, V_high - V_op + ΔI·Z(0))
         double op = spec.operatingPointV();
-        assertThat(f.allowedV()).isEqualTo(Math.max(op - spec.limits().lowerV(), spec.limits().upperV() - op));
+        double z0 = f.points().get(0).evaluation().network().dcResistanceOhms();
+        double deltaI = spec.scenario().rail().currentStepA();
+        assertThat(f.allowedV()).isEqualTo(Math.min(op - spec.limits().lowerV(),
+                spec.limits().upperV() - op + deltaI * z0));
+        // and that identity holds on every bank of the frontier (worst-case-math: droop − overshoot = ΔI·Z(0))
+        for (ExcursionFrontier.Point p : f.points()) {
+            assertThat(p.evaluation().figures().droopV() - p.evaluation().figures().overshootV())
+                    .isCloseTo(deltaI * z0, org.assertj.core.api.Assertions.within(1e-9));
+        }
         assertThat(f.tightestV()).isLessThan(f.allowedV());
         assertThat(f.points()).allSatisfy(p -> assertThat(p.meetsLimit()).isTrue());
         assertMonotoneAndHonest(f);
