@@ -262,8 +262,9 @@ public final class Charts {
             fMax = Math.max(fMax, f[f.length - 1]);
             data.addSeries(xy);
         }
-        LogAxis fAxis = logAxis("frequency", "Hz", fMin, fMax);
-        LogAxis zAxis = logAxis("|Z| at the load", "Ω", zMin, zMax);
+        // the frequency axis ends where the curve does (no empty decade after it); |Z| spans whole decades
+        LogAxis fAxis = logAxis("frequency", "Hz", fMin, fMax, false);
+        LogAxis zAxis = logAxis("|Z| at the load", "Ω", zMin, zMax, true);
         XYLineAndShapeRenderer lines = lineRenderer(plot.series().size());
         XYPlot xy = new XYPlot(data, fAxis, zAxis, lines);
         style(xy);
@@ -646,12 +647,16 @@ public final class Charts {
         a.setTickMarkPaint(new Color(0x999999));
     }
 
-    /** Decade-aligned log axis with one labelled tick per decade and nine minor ticks between. */
-    private static LogAxis logAxis(String label, String unit, double min, double max) {
+    /**
+     * Log axis from the decade at or below {@code min} to the decade at or above {@code max}
+     * ({@code wholeDecades}) or to {@code max} itself, with one labelled tick per decade and nine minor
+     * ticks between.
+     */
+    private static LogAxis logAxis(String label, String unit, double min, double max, boolean wholeDecades) {
         LogAxis a = new TextLogAxis(label);
         styleAxis(a);
         double lo = Math.pow(10, Math.floor(Math.log10(min) + 1e-9));
-        double hi = Math.pow(10, Math.ceil(Math.log10(max) - 1e-9));
+        double hi = wholeDecades ? Math.pow(10, Math.ceil(Math.log10(max) - 1e-9)) : max;
         if (hi <= lo) {
             hi = lo * 10;
         }
