@@ -5,6 +5,8 @@ import breakwater.design.BankEvaluator;
 import breakwater.design.CapacitorBank;
 import breakwater.design.Evaluation;
 import breakwater.design.Limits;
+import breakwater.diagnostic.Diagnostic;
+import breakwater.diagnostic.InputException;
 import breakwater.optimize.BankSearch;
 import breakwater.optimize.MaxCounts;
 import breakwater.optimize.SearchResult;
@@ -64,7 +66,8 @@ final class SolveCommand implements Callable<Integer> {
 
     @Option(names = "--margin", paramLabel = "VOLTAGE", converter = VoltageConverter.class,
             description = "Keep the worst case at least this far inside the tolerance band on both sides "
-                    + "(e.g. 1mV): a design margin for part spread and model error. Default: none.")
+                    + "(e.g. 1mV): a design margin for part spread and model error. Default: [solver] margin, "
+                    + "else none.")
     Double marginV;
 
     /** Parses a voltage in engineering notation ("1 mV", "0.5m", "1e-3"). */
@@ -85,37 +88,47 @@ final class SolveCommand implements Callable<Integer> {
     }
 
     /**
-     * The judge the search uses with --margin: the tolerance band narrowed by the margin on both sides. A
-     * margin that leaves no room on one side is a usage error that says how much room there is.
+     * The judge the search uses with a design margin: the tolerance band narrowed by the margin on both
+     * sides. A margin that leaves no room on one side is refused, saying how much room there is: a usage
+     * error for --margin, an input error for the scenario's solver.margin.
+     *
+     * @param source "--margin" or "solver.margin", where the margin was given
      */
-    static BankEvaluator narrowed(BankEvaluator spec, double marginV) {
+    static BankEvaluator narrowed(BankEvaluator spec, double marginV, String source) throws InputException {
         Limits band = spec.limits();
         double op = spec.operatingPointV();
         double below = op - band.lowerV();
         double above = band.upperV() - op;
         // a margin of the whole room (to rounding) leaves nothing to pass with
         if (!(marginV < below * (1 - 1e-9) && marginV < above * (1 - 1e-9))) {
-            throw new UsageException(String.format(Locale.ROOT, "--margin %s leaves no room: from the %s operating "
-                            + "point the tolerance band allows %s of droop and %s of overshoot; choose a margin below %s",
+            String message = String.format(Locale.ROOT, "%s %s leaves no room: from the %s operating point the "
+                            + "tolerance band allows %s of droop and %s of overshoot; choose a margin below %s", source,
                     format(marginV, VOLTAGE), format(op, VOLTAGE, 5), format(below, VOLTAGE), format(above, VOLTAGE),
-                    format(Math.min(below, above), VOLTAGE)));
+                    format(Math.min(below, above), VOLTAGE));
+            if (source.startsWith("--")) {
+                throw new UsageException(message);
+            }
+            throw new InputException(Diagnostic.of(spec.scenario().source(), message));
         }
         return spec.withLimits(new Limits(band.lowerV() + marginV, band.upperV() - marginV));
     }
 
-    /** The margin the run asked for: summary key, console line, report section, and its condition for exit 0. */
-    static RunExtras marginExtras(Evaluation e, double marginV) {
+    /**
+     * The margin the run asked for (from {@code source}): summary key, console line, report section, and
+     * its condition for exit 0.
+     */
+    static RunExtras marginExtras(Evaluation e, double marginV, String source) {
         double kept = e.figures().marginV();
         // the search judged the same worst case (to rounding): allow a nanovolt
         boolean met = kept >= marginV - 1e-9;
-        String line = String.format(Locale.ROOT, "Margin     %s required inside the tolerance band (--margin), %s kept: %s",
-                format(marginV, VOLTAGE), format(kept, VOLTAGE), met ? "met" : "NOT MET");
-        String why = String.format(Locale.ROOT, "the margin kept (%s) is less than the %s required by --margin",
-                format(kept, VOLTAGE), format(marginV, VOLTAGE));
+        String line = String.format(Locale.ROOT, "Margin     %s required inside the tolerance band (%s), %s kept: %s",
+                format(marginV, VOLTAGE), source, format(kept, VOLTAGE), met ? "met" : "NOT MET");
+        String why = String.format(Locale.ROOT, "the margin kept (%s) is less than the %s required by %s",
+                format(kept, VOLTAGE), format(marginV, VOLTAGE), source);
         ReportModel.Section section = ReportModel.Section.text("Required margin", String.format(Locale.ROOT,
                 "The run asked for the worst-case droop and overshoot to stay at least %s inside the tolerance band "
-                        + "(--margin), as a design margin for part spread and model error. Margin kept: %s (%s).",
-                format(marginV, VOLTAGE), format(kept, VOLTAGE), met ? "met" : "not met"));
+                        + "(%s), as a design margin for part spread and model error. Margin kept: %s (%s).",
+                format(marginV, VOLTAGE), source, format(kept, VOLTAGE), met ? "met" : "not met"));
         return RunExtras.of(List.of(section), summary -> summary.put("required_margin_v", marginV), line)
                 .withModeCondition(met, why);
     }
@@ -124,8 +137,10 @@ final class SolveCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         Inputs in = Inputs.load(scenarioFile, output.footprint);
         BankEvaluator evaluator = new BankEvaluator(in.scenario(), in.footprint());
-        double margin = marginV == null ? 0 : marginV;
-        BankEvaluator searchJudge = margin > 0 ? narrowed(evaluator, margin) : evaluator;
+        // --margin overrides the scenario's [solver] margin
+        double margin = marginV != null ? marginV : in.scenario().designMarginV();
+        String marginSource = marginV != null ? "--margin" : "solver.margin";
+        BankEvaluator searchJudge = margin > 0 ? narrowed(evaluator, margin, marginSource) : evaluator;
         List<Part> candidates = in.catalog().parts();
         int[] max = MaxCounts.of(candidates, in.scenario());
         SearchSettings settings = search.settings(in.scenario());
@@ -146,7 +161,7 @@ final class SolveCommand implements Callable<Integer> {
             Evaluation e = evaluator.evaluate(result.bank());
             RunExtras extras = monteCarlo.run(evaluator, e.bank(), in.scenario(), output.quiet, err);
             if (margin > 0) {
-                extras = extras.plus(marginExtras(e, margin));
+                extras = extras.plus(marginExtras(e, margin, marginSource));
             }
             return Results.emit("solve", in, output.footprint, evaluator, e, java.util.Optional.of(result), extras,
                     output, spec.commandLine().getOut(), err);

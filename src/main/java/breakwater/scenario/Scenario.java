@@ -22,6 +22,7 @@ import java.util.Optional;
  * @param solver        search settings
  * @param requireTarget also hold |Z| under the target impedance in the band
  * @param existingBankFile bank to cost down, resolved against the scenario's folder, or "" for none
+ * @param designMarginV how far inside the tolerance band {@code solve} keeps the worst case, V (0: none)
  */
 public record Scenario(
         String source,
@@ -37,7 +38,8 @@ public record Scenario(
         CostModel cost,
         SolverSettings solver,
         boolean requireTarget,
-        String existingBankFile) {
+        String existingBankFile,
+        double designMarginV) {
 
     public Scenario {
         Objects.requireNonNull(source, "source");
@@ -52,8 +54,19 @@ public record Scenario(
         Objects.requireNonNull(cost, "cost");
         Objects.requireNonNull(solver, "solver");
         Objects.requireNonNull(existingBankFile, "existingBankFile");
+        if (!(designMarginV >= 0) || !Double.isFinite(designMarginV)) {
+            throw new IllegalArgumentException("design margin must be finite and >= 0, got " + designMarginV);
+        }
         // keep file order: the reader passes a LinkedHashMap; copy defensively but in order
         footprints = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(footprints));
+    }
+
+    /** Without a design margin. */
+    public Scenario(String source, Rail rail, Band band, Regulator regulator, Plane plane, PackagePath packagePath,
+                    Die die, Path catalogFile, Board board, Map<String, Footprint> footprints, CostModel cost,
+                    SolverSettings solver, boolean requireTarget, String existingBankFile) {
+        this(source, rail, band, regulator, plane, packagePath, die, catalogFile, board, footprints, cost, solver,
+                requireTarget, existingBankFile, 0.0);
     }
 
     public Optional<Path> existingBank() {

@@ -41,7 +41,7 @@ import java.util.regex.Pattern;
  * [board]      max_parts, max_distinct, [board.max_per_case] CASE = count
  * [footprint.NAME]  CASE = mounting inductance
  * [cost]       placement, line_item, currency
- * [solver]     time_limit ("30 s", "2 min", "500 ms"; a number is seconds), seed
+ * [solver]     time_limit ("30 s", "2 min", "500 ms"; a number is seconds), seed, margin (a voltage: solve keeps the worst case that far inside the band)
  * [objective]  require_target
  * [existing]   file (relative to the scenario's folder; read by trim, which reports it if missing)
  * </pre>
@@ -71,7 +71,7 @@ public final class ScenarioReader {
         SECTIONS.put("board", List.of("max_parts", "max_distinct", "max_per_case"));
         SECTIONS.put("footprint", List.of());
         SECTIONS.put("cost", List.of("placement", "line_item", "currency"));
-        SECTIONS.put("solver", List.of("time_limit", "seed"));
+        SECTIONS.put("solver", List.of("time_limit", "seed", "margin"));
         SECTIONS.put("objective", List.of("require_target"));
         SECTIONS.put("existing", List.of("file"));
     }
@@ -159,10 +159,11 @@ public final class ScenarioReader {
             CostModel cost = cost();
             SolverSettings solver = solver();
             boolean requireTarget = objective();
+            double margin = nonNegative("solver", "margin", Quantity.VOLTAGE);
             String existing = existing();
             problems.throwIfAnyInFileOrder();
             return new Scenario(source, rail, band, regulator, plane, packagePath, die, catalog, board,
-                    footprints, cost, solver, requireTarget, existing);
+                    footprints, cost, solver, requireTarget, existing, margin);
         }
 
         // ---- structure ----

@@ -77,6 +77,27 @@ class ModesCliTest {
         assertThat(Files.readString(out.resolve("report.html"))).contains("Required margin");
     }
 
+    /** The scenario's [solver] margin is the default of --margin, and an impossible one is an input error. */
+    @Test
+    void theScenarioCanHoldTheMargin(@TempDir Path dir) throws IOException {
+        Path scenario = dir.resolve("with-margin.toml");
+        String text = Files.readString(SMALL).replace("file = \"parts.csv\"",
+                "file = \"" + RAIL.resolve("parts.csv").toString().replace("\\", "/") + "\"")
+                .replace("file = \"existing.bank.csv\"", "file = \"" + EXISTING.toString().replace("\\", "/") + "\"");
+        Files.writeString(scenario, text.replace("[solver]\n", "[solver]\nmargin = \"10 mV\"\n"));
+        CliTest.Run r = run(args("solve", scenario.toString()));
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("10 mV required inside the tolerance band (solver.margin)");
+        Files.writeString(scenario, text.replace("[solver]\n", "[solver]\nmargin = \"60 mV\"\n"));
+        CliTest.Run bad = run(args("solve", scenario.toString()));
+        assertThat(bad.code()).isEqualTo(ExitCodes.INVALID_INPUT);
+        assertThat(bad.err()).contains("solver.margin 60 mV leaves no room");
+        // --margin overrides it
+        CliTest.Run over = run(args("solve", scenario.toString(), "--margin", "5mV"));
+        assertThat(over.code()).as(over.err()).isEqualTo(ExitCodes.OK);
+        assertThat(over.out()).contains("5 mV required inside the tolerance band (--margin)");
+    }
+
     /**
      * The worst droop is never below ΔI·Z(0) (the step response settles there; final value theorem): on the
      * small rail 2 A × 0.5 mΩ = 1 mV, so a 48 mV margin, which leaves 1 mV of the 49 mV below the operating

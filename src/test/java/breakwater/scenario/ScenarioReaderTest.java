@@ -171,6 +171,14 @@ class ScenarioReaderTest {
     }
 
     @Test
+    void solverMarginIsAVoltageAndDefaultsToNone() throws Exception {
+        assertThat(parse(BASE).designMarginV()).isZero();
+        assertClose(parse(BASE + "[solver]\nmargin = \"1.5 mV\"\n").designMarginV(), 1.5e-3);
+        assertThat(onlyProblem(BASE + "[solver]\nmargin = \"1 mA\"\n")).contains("solver.margin", "a current");
+        assertThat(onlyProblem(BASE + "[solver]\nmargin = \"-1 mV\"\n")).contains("solver.margin", "negative");
+    }
+
+    @Test
     void footprintsKeepFileOrderAndCaseCodesKeepTheirZero() throws Exception {
         Scenario s = parse(BASE + """
                 [footprint.zeta]
