@@ -5,6 +5,7 @@ import breakwater.design.BankEvaluator;
 import breakwater.design.CapacitorBank;
 import breakwater.design.Evaluation;
 import breakwater.design.Limits;
+import breakwater.network.NetworkBuilder;
 import breakwater.diagnostic.Diagnostic;
 import breakwater.diagnostic.InputException;
 import breakwater.optimize.BankSearch;
@@ -99,12 +100,17 @@ final class SolveCommand implements Callable<Integer> {
         double op = spec.operatingPointV();
         double below = op - band.lowerV();
         double above = band.upperV() - op;
-        // a margin of the whole room (to rounding) leaves nothing to pass with
-        if (!(marginV < below * (1 - 1e-9) && marginV < above * (1 - 1e-9))) {
+        // no bank droops less than ΔI·Z(0) (where its step response settles: final value theorem), so the
+        // droop side has that much less room than the band; a margin of the whole room leaves nothing
+        double settle = spec.scenario().rail().currentStepA()
+                * NetworkBuilder.build(spec.scenario(), List.of(), spec.footprint()).dcResistanceOhms();
+        double room = Math.min(below - settle, above);
+        if (!(marginV < room * (1 - 1e-9))) {
             String message = String.format(Locale.ROOT, "%s %s leaves no room: from the %s operating point the "
-                            + "tolerance band allows %s of droop and %s of overshoot; choose a margin below %s", source,
+                            + "tolerance band allows %s of droop and %s of overshoot, and no bank droops less than "
+                            + "ΔI·Z(0) = %s; choose a margin below %s", source,
                     format(marginV, VOLTAGE), format(op, VOLTAGE, 5), format(below, VOLTAGE), format(above, VOLTAGE),
-                    format(Math.min(below, above), VOLTAGE));
+                    format(settle, VOLTAGE), format(room, VOLTAGE));
             if (source.startsWith("--")) {
                 throw new UsageException(message);
             }
@@ -129,8 +135,10 @@ final class SolveCommand implements Callable<Integer> {
                 "The run asked for the worst-case droop and overshoot to stay at least %s inside the tolerance band "
                         + "(%s), as a design margin for part spread and model error. Margin kept: %s (%s).",
                 format(marginV, VOLTAGE), source, format(kept, VOLTAGE), met ? "met" : "not met"));
-        return RunExtras.of(List.of(section), summary -> summary.put("required_margin_v", marginV), line)
-                .withModeCondition(met, why);
+        return RunExtras.of(List.of(section), summary -> {
+            summary.put("required_margin_v", marginV);
+            summary.put("required_margin_met", met);
+        }, line).withModeCondition(met, why);
     }
 
     @Override

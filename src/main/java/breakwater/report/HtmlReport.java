@@ -37,6 +37,7 @@ public final class HtmlReport {
             .verdict strong { font-size: 16px; }
             .verdict.pass strong { color: var(--pass); }
             .verdict.pass.thin { border-color: #c98a00; background: #fff8e5; }
+            .verdict.pass.thin strong { color: #7a5200; }
             .verdict.fail strong { color: var(--fail); }
             .verdict ul { margin: 4px 0 0; padding-left: 20px; }
             dl.figures { display: grid; grid-template-columns: repeat(auto-fill, minmax(180px, 1fr)); gap: 8px;
@@ -168,7 +169,8 @@ public final class HtmlReport {
         // a pass with remarks (a thin margin) is drawn amber, not green
         String kind = !v.meetsSpec() ? "fail" : v.thinMargin() ? "pass thin" : "pass";
         b.append("<div id=\"verdict\" class=\"verdict ").append(kind).append("\">\n<strong>")
-                .append(v.meetsSpec() ? "&#10003; " : "&#10007; ").append(esc(v.headline())).append("</strong>\n");
+                .append(!v.meetsSpec() ? "&#10007; " : v.thinMargin() ? "&#9888; " : "&#10003; ")
+                .append(esc(v.headline())).append("</strong>\n");
         if (!v.reasons().isEmpty()) {
             b.append("<ul>\n");
             for (String r : v.reasons()) {
