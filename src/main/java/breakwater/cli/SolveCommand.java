@@ -47,7 +47,9 @@ import static breakwater.units.Quantity.VOLTAGE;
             "target impedance - and never beyond the board's max_per_case and max_parts.",
             "",
             "Progress is printed on stderr; Ctrl-C stops the search and still writes the best bank found.",
-            "Exit 0 when the bank found meets the spec; 1 when none was found (the closest is written)."})
+            "With --margin (or [solver] margin) the search keeps the worst case that far inside the band.",
+            "Exit 0 when the bank found meets the spec (and keeps the margin asked for); 1 when none was",
+            "found (the closest is written)."})
 final class SolveCommand implements Callable<Integer> {
 
     @Spec
