@@ -6,7 +6,7 @@ import breakwater.catalog.Part;
 import breakwater.design.BankEvaluator;
 import breakwater.design.CapacitorBank;
 import breakwater.design.Evaluation;
-import breakwater.design.WorstCaseFigures;
+import breakwater.design.WorstCaseVolts;
 import breakwater.optimize.BankSearch;
 import breakwater.optimize.CostDown;
 import breakwater.optimize.SearchResult;
@@ -132,8 +132,8 @@ final class TrimCommand implements Callable<Integer> {
         // in decimal, like the costs themselves (0.062, not 0.06200000000000028)
         double savings = java.math.BigDecimal.valueOf(old.cost().total()).subtract(java.math.BigDecimal.valueOf(e.cost().total())).doubleValue();
         List<CostDown.Change> changes = CostDown.changes(d.existing(), d.chosen());
-        WorstCaseFigures was = old.figures();
-        WorstCaseFigures now = e.figures();
+        WorstCaseVolts was = old.figures();
+        WorstCaseVolts now = e.figures();
 
         StringBuilder c = new StringBuilder();
         if (d.unchanged()) {

@@ -145,25 +145,25 @@ public final class BankEvaluator {
     }
 
     /** The exact worst case of {@code network} in volts: the one computation solver and reports share. */
-    public WorstCaseFigures worstCaseFigures(PowerNetwork network) {
-        return worstCaseFigures(network, PoleResidueModel.of(network));
+    public WorstCaseVolts worstCaseVolts(PowerNetwork network) {
+        return worstCaseVolts(network, PoleResidueModel.of(network));
     }
 
-    /** As {@link #worstCaseFigures(PowerNetwork)}, from the network's model already built. */
-    public WorstCaseFigures worstCaseFigures(PowerNetwork network, PoleResidueModel model) {
-        breakwater.timedomain.WorstCaseFigures f;
+    /** As {@link #worstCaseVolts(PowerNetwork)}, from the network's model already built. */
+    public WorstCaseVolts worstCaseVolts(PowerNetwork network, PoleResidueModel model) {
+        breakwater.timedomain.WorstCasePerAmpere f;
         try {
             // the figures-only path: the same exact values as analyze(), without building the patterns
             f = WorstCaseAnalyzer.figures(model, scenario.rail().edgeTimeS());
         } catch (UnboundedWorstCaseException e) {
             throw new IllegalStateException("unbounded worst case after the constructor's check", e);
         }
-        return WorstCaseFigures.of(scenario.rail(), network.dcResistanceOhms(), f.droopOhms(), f.overshootOhms(),
+        return WorstCaseVolts.of(scenario.rail(), network.dcResistanceOhms(), f.droopOhms(), f.overshootOhms(),
                 limits.lowerV(), limits.upperV());
     }
 
-    private WorstCaseFigures figures(PowerNetwork network, WorstCase wc) {
-        return WorstCaseFigures.of(scenario.rail(), network.dcResistanceOhms(), wc.droopOhms(), wc.overshootOhms(),
+    private WorstCaseVolts figures(PowerNetwork network, WorstCase wc) {
+        return WorstCaseVolts.of(scenario.rail(), network.dcResistanceOhms(), wc.droopOhms(), wc.overshootOhms(),
                 limits.lowerV(), limits.upperV());
     }
 

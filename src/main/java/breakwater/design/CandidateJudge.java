@@ -180,7 +180,7 @@ public final class CandidateJudge {
             }
         }
         double targetExcess = s.requireTarget() ? Math.max(0, peak * (1 + TARGET_GUARD) / target - 1) : 0;
-        WorstCaseFigures wc;
+        WorstCaseVolts wc;
         try {
             PoleResidueModel near = warmStart ? recentModels.get(used) : null;
             PoleResidueModel model = near != null ? near.near(network) : PoleResidueModel.of(network);
@@ -189,7 +189,7 @@ public final class CandidateJudge {
             if (model.warmStarted()) {
                 warmStarts++;
             }
-            wc = evaluator.worstCaseFigures(network, model);
+            wc = evaluator.worstCaseVolts(network, model);
         } catch (breakwater.timedomain.ModelException unsolvable) {
             // The model of this one candidate failed its self-checks: it cannot be judged, so the search
             // must not pick it. It scores as a volt beyond both limits; the final verdict always comes
@@ -197,7 +197,7 @@ public final class CandidateJudge {
             unjudged++;
             double lower = evaluator.limits().lowerV();
             double upper = evaluator.limits().upperV();
-            wc = new WorstCaseFigures(1, 1, evaluator.operatingPointV(), lower - 1, upper + 1, lower, upper,
+            wc = new WorstCaseVolts(1, 1, evaluator.operatingPointV(), lower - 1, upper + 1, lower, upper,
                     Double.POSITIVE_INFINITY);
         }
         return new Judgement(wc.droopV(), wc.overshootV(), wc.droopExcessV(), wc.overshootExcessV(), boardExcess,

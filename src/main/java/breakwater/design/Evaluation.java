@@ -33,7 +33,7 @@ public record Evaluation(
         List<BoardCheck.Violation> board,
         PoleResidueModel model,
         WorstCase worstCase,
-        WorstCaseFigures figures,
+        WorstCaseVolts figures,
         List<ResonanceFigures> resonances) {
 
     public Evaluation {

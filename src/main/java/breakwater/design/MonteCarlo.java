@@ -21,7 +21,7 @@ import java.util.stream.IntStream;
  * average out): capacitance × (1 + t·u₁), ESR × (1 + s·u₂), ESL × (1 + s·u₃), with u₁, u₂, u₃ uniform
  * on [−1, 1], t the part's capacitance tolerance ({@link ToleranceRule}) and s the ESR/ESL spread. The
  * mounting inductance belongs to the layout and is not drawn. Each sample is then judged with the
- * evaluator's exact worst case ({@link BankEvaluator#worstCaseFigures}).
+ * evaluator's exact worst case ({@link BankEvaluator#worstCaseVolts}).
  *
  * <p>Reproducible: sample k uses its own generator, seeded with the k-th number of a
  * {@link SplittableRandom} seeded with {@code seed}, and results are stored by index, so the outcome
@@ -127,7 +127,7 @@ public final class MonteCarlo {
      * @param overshootV  worst overshoot of each sample, by sample index
      * @param passing     samples whose V_min and V_max stay inside the evaluator's limits
      */
-    public record Result(Settings settings, List<PartSpread> parts, WorstCaseFigures nominal, double[] droopV,
+    public record Result(Settings settings, List<PartSpread> parts, WorstCaseVolts nominal, double[] droopV,
                          double[] overshootV, int passing) {
         public Result {
             parts = List.copyOf(parts);
@@ -210,7 +210,7 @@ public final class MonteCarlo {
         boolean[] pass = new boolean[seeds.length];
         IntStream.range(0, seeds.length).parallel().forEach(k -> {
             List<BankEntry> drawn = sample(entries, tol, settings.spreadFraction(), seeds[k]);
-            WorstCaseFigures f = evaluator.worstCaseFigures(
+            WorstCaseVolts f = evaluator.worstCaseVolts(
                     NetworkBuilder.build(evaluator.scenario(), drawn, evaluator.footprint()));
             droop[k] = f.droopV();
             over[k] = f.overshootV();
@@ -220,7 +220,7 @@ public final class MonteCarlo {
         for (boolean b : pass) {
             passing += b ? 1 : 0;
         }
-        WorstCaseFigures nominal = evaluator.worstCaseFigures(
+        WorstCaseVolts nominal = evaluator.worstCaseVolts(
                 NetworkBuilder.build(evaluator.scenario(), entries, evaluator.footprint()));
         return new Result(settings, spreads, nominal, droop, over, passing);
     }

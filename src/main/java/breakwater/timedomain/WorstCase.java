@@ -31,7 +31,7 @@ public record WorstCase(double droopOhms, double overshootOhms, LoadPattern droo
     }
 
     /** The figures alone, without the patterns. */
-    public WorstCaseFigures figures() {
-        return new WorstCaseFigures(droopOhms, overshootOhms, edgeTimeS);
+    public WorstCasePerAmpere figures() {
+        return new WorstCasePerAmpere(droopOhms, overshootOhms, edgeTimeS);
     }
 }

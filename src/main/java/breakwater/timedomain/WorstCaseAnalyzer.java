@@ -112,20 +112,20 @@ public final class WorstCaseAnalyzer {
      *
      * @throws UnboundedWorstCaseException when t_e = 0 and Z(∞) is infinite
      */
-    public static WorstCaseFigures figures(PoleResidueModel model, double edgeTimeS)
+    public static WorstCasePerAmpere figures(PoleResidueModel model, double edgeTimeS)
             throws UnboundedWorstCaseException {
         if (!(edgeTimeS >= 0) || !Double.isFinite(edgeTimeS)) {
             throw new IllegalArgumentException("edge time must be finite and >= 0, got " + edgeTimeS);
         }
         if (edgeTimeS == 0) {
             IdealSink sink = idealMarch(model, false);
-            return new WorstCaseFigures(sink.droop, Math.max(sink.overshoot, 0), 0.0);
+            return new WorstCasePerAmpere(sink.droop, Math.max(sink.overshoot, 0), 0.0);
         }
         Workspace ws = WORKSPACE.get();
         int n = prepare(model, edgeTimeS, ws);
         double droop = ChainDp.maximum(ws.w, 1.0, ws.c, n, ws.dp);
         double overshoot = ChainDp.maximum(ws.w, -1.0, ws.c, n, ws.dp);
-        return new WorstCaseFigures(Math.max(droop, 0), Math.max(overshoot, 0), edgeTimeS);
+        return new WorstCasePerAmpere(Math.max(droop, 0), Math.max(overshoot, 0), edgeTimeS);
     }
 
     /** The objective weights of the edge-limited path on {@link #lagGrid}'s lags (a copy, for cross-checks). */

@@ -6,7 +6,7 @@ import breakwater.timedomain.PoleResidueModel;
 import breakwater.timedomain.UnboundedWorstCaseException;
 import breakwater.timedomain.WorstCase;
 import breakwater.timedomain.WorstCaseAnalyzer;
-import breakwater.timedomain.WorstCaseFigures;
+import breakwater.timedomain.WorstCasePerAmpere;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Mode;
@@ -96,12 +96,12 @@ public class WorstCaseBench {
     }
 
     @Benchmark
-    public WorstCaseFigures candidateFiguresIdealEdges() throws UnboundedWorstCaseException {
+    public WorstCasePerAmpere candidateFiguresIdealEdges() throws UnboundedWorstCaseException {
         return WorstCaseAnalyzer.figures(candidateModel, 0.0);
     }
 
     @Benchmark
-    public WorstCaseFigures candidateFiguresEdgeLimited() throws UnboundedWorstCaseException {
+    public WorstCasePerAmpere candidateFiguresEdgeLimited() throws UnboundedWorstCaseException {
         return WorstCaseAnalyzer.figures(candidateModel, CANDIDATE_EDGE_S);
     }
 

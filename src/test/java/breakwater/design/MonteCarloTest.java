@@ -43,7 +43,7 @@ class MonteCarloTest {
         BankEvaluator ev = new BankEvaluator(scenario(0.05), Optional.empty());
         CapacitorBank b = bank(2, 3, 4, 5);
         MonteCarlo.Result r = MonteCarlo.run(ev, b, new MonteCarlo.Settings(40, 7, 0.0, p -> 0.0));
-        WorstCaseFigures nominal = ev.evaluate(b).figures();
+        WorstCaseVolts nominal = ev.evaluate(b).figures();
         assertThat(r.droopV()).containsOnly(nominal.droopV());
         assertThat(r.overshootV()).containsOnly(nominal.overshootV());
         assertThat(r.droop().max()).isEqualTo(r.droop().p50());

@@ -18,23 +18,23 @@ import breakwater.scenario.Rail;
  * @param rogueFactor  worst excursion (larger of droop and overshoot) / (ΔI·Z_t): how far the
  *                     target-impedance promise is off; 1 for an impedance flat at the target
  */
-public record WorstCaseFigures(double droopV, double overshootV, double operatingV, double minVoltageV,
+public record WorstCaseVolts(double droopV, double overshootV, double operatingV, double minVoltageV,
                                double maxVoltageV, double lowerLimitV, double upperLimitV, double rogueFactor) {
 
     /** Figures against the rail's own tolerance band. */
-    public static WorstCaseFigures of(Rail rail, double dcResistanceOhms, double droopOhms, double overshootOhms) {
+    public static WorstCaseVolts of(Rail rail, double dcResistanceOhms, double droopOhms, double overshootOhms) {
         return of(rail, dcResistanceOhms, droopOhms, overshootOhms, rail.lowerLimitV(), rail.upperLimitV());
     }
 
     /** Figures against the given limits (the rail's band, or a tighter one; see {@link Limits}). */
-    public static WorstCaseFigures of(Rail rail, double dcResistanceOhms, double droopOhms, double overshootOhms,
+    public static WorstCaseVolts of(Rail rail, double dcResistanceOhms, double droopOhms, double overshootOhms,
                                       double lowerLimitV, double upperLimitV) {
         double dI = rail.currentStepA();
         double droop = dI * droopOhms;
         double over = dI * overshootOhms;
         double op = rail.voltageV() - dcResistanceOhms * rail.minCurrentA();
         double promise = dI * rail.targetImpedanceOhms();
-        return new WorstCaseFigures(droop, over, op, op - droop, op + over, lowerLimitV, upperLimitV,
+        return new WorstCaseVolts(droop, over, op, op - droop, op + over, lowerLimitV, upperLimitV,
                 Math.max(droop, over) / promise);
     }
 

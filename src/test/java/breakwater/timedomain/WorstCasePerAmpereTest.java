@@ -19,7 +19,7 @@ import static org.assertj.core.api.Assertions.within;
  * The figures-only entry point used for scoring: it must give exactly what the full analysis reports,
  * and its block-wise hat weights must equal the lag-by-lag closed-form sum on the same grid.
  */
-class WorstCaseFiguresTest {
+class WorstCasePerAmpereTest {
 
     /** A random network; half of them get a plane at the load node so that ideal edges are bounded. */
     private static PowerNetwork network(long seed) {
@@ -42,7 +42,7 @@ class WorstCaseFiguresTest {
         PoleResidueModel m = PoleResidueModel.of(network(seed));
         double te = Math.pow(10, logTe);
         WorstCase full = WorstCaseAnalyzer.analyze(m, te);
-        WorstCaseFigures fig = WorstCaseAnalyzer.figures(m, te);
+        WorstCasePerAmpere fig = WorstCaseAnalyzer.figures(m, te);
         assertThat(fig.droopOhms()).isEqualTo(full.droopOhms());
         assertThat(fig.overshootOhms()).isEqualTo(full.overshootOhms());
         assertThat(fig.edgeTimeS()).isEqualTo(te);
@@ -57,7 +57,7 @@ class WorstCaseFiguresTest {
             return;
         }
         WorstCase full = WorstCaseAnalyzer.analyze(m, 0.0);
-        WorstCaseFigures fig = WorstCaseAnalyzer.figures(m, 0.0);
+        WorstCasePerAmpere fig = WorstCaseAnalyzer.figures(m, 0.0);
         assertThat(fig).isEqualTo(full.figures());
     }
 
@@ -103,8 +103,8 @@ class WorstCaseFiguresTest {
         PoleResidueModel m = PoleResidueModel.of(Networks.moderate());
         assertThatThrownBy(() -> WorstCaseAnalyzer.figures(m, -1e-9)).isInstanceOf(IllegalArgumentException.class);
         assertThatThrownBy(() -> WorstCaseAnalyzer.figures(m, Double.NaN)).isInstanceOf(IllegalArgumentException.class);
-        assertThatThrownBy(() -> new WorstCaseFigures(-1e-3, 0, 0)).isInstanceOf(IllegalArgumentException.class);
-        assertThatThrownBy(() -> new WorstCaseFigures(1e-3, Double.NaN, 0)).isInstanceOf(IllegalArgumentException.class);
-        assertThatThrownBy(() -> new WorstCaseFigures(1e-3, 0, -1)).isInstanceOf(IllegalArgumentException.class);
+        assertThatThrownBy(() -> new WorstCasePerAmpere(-1e-3, 0, 0)).isInstanceOf(IllegalArgumentException.class);
+        assertThatThrownBy(() -> new WorstCasePerAmpere(1e-3, Double.NaN, 0)).isInstanceOf(IllegalArgumentException.class);
+        assertThatThrownBy(() -> new WorstCasePerAmpere(1e-3, 0, -1)).isInstanceOf(IllegalArgumentException.class);
     }
 }

@@ -9,9 +9,9 @@ package breakwater.timedomain;
  * @param overshootOhms largest rise above it, per ampere of ΔI, &ge; 0
  * @param edgeTimeS     the load's edge time t_e used (0 = ideal edges): |du/dt| &le; 1/t_e
  */
-public record WorstCaseFigures(double droopOhms, double overshootOhms, double edgeTimeS) {
+public record WorstCasePerAmpere(double droopOhms, double overshootOhms, double edgeTimeS) {
 
-    public WorstCaseFigures {
+    public WorstCasePerAmpere {
         if (!(droopOhms >= 0) || !Double.isFinite(droopOhms) || !(overshootOhms >= 0)
                 || !Double.isFinite(overshootOhms)) {
             throw new IllegalArgumentException("worst-case droop and overshoot must be finite and >= 0, got "

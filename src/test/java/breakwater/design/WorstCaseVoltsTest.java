@@ -12,7 +12,7 @@ import java.util.Optional;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
-class WorstCaseFiguresTest {
+class WorstCaseVoltsTest {
 
     @Test
     void flatImpedanceAtTheTargetGivesARogueFactorOfOne() throws Exception {
@@ -25,7 +25,7 @@ class WorstCaseFiguresTest {
         var scenario = Fixtures.scenario().rail(rail).regulator(new Regulator(zt, l))
                 .plane(new Plane(l / (zt * zt), zt)).die(Die.NONE).build();
         Evaluation e = new BankEvaluator(scenario, Optional.empty()).evaluate(CapacitorBank.EMPTY);
-        WorstCaseFigures f = e.figures();
+        WorstCaseVolts f = e.figures();
         assertThat(f.droopV()).isCloseTo(rail.currentStepA() * zt, within(1e-9));
         assertThat(f.rogueFactor()).isCloseTo(1.0, within(1e-9));
         // DESIGN.md §1: V_min = V_nom − Z(0)·I_min − droop, with Z(0) = R_reg here
