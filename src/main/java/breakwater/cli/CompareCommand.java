@@ -13,7 +13,6 @@ import breakwater.optimize.SearchResult;
 import breakwater.optimize.SearchSettings;
 import breakwater.report.Overlays;
 import breakwater.report.ReportModel;
-import breakwater.report.Verdicts;
 import breakwater.scenario.Footprint;
 import breakwater.scenario.Scenario;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -131,7 +130,7 @@ final class CompareCommand implements Callable<Integer> {
                     bank = r.bank();
                 }
                 Evaluation e = ev.evaluate(bank);
-                rows.add(new Row(name, ev, e, result, Verdicts.meetsSpec(scenario, e)));
+                rows.add(new Row(name, ev, e, result, breakwater.design.Verdict.meetsSpec(e, scenario.requireTarget())));
             }
             Row primary = rows.stream().filter(Row::meets)
                     .min((a, b) -> Double.compare(a.evaluation().cost().total(), b.evaluation().cost().total()))
@@ -139,8 +138,7 @@ final class CompareCommand implements Callable<Integer> {
             boolean allMeet = rows.stream().allMatch(Row::meets);
             List<String> failing = rows.stream().filter(r -> !r.meets()).map(Row::name).toList();
             RunExtras extras = extras(in, rows, primary, given.isPresent(), all, each, seq.interrupted())
-                    .withModeCondition(allMeet, "NOT EVERY FOOTPRINT MEETS THE SPEC: " + String.join(", ", failing)
-                            + " do" + (failing.size() == 1 ? "es" : "") + " not");
+                    .withFailure(allMeet, new breakwater.design.Verdict.FootprintsFailing(failing));
             return Results.emit("compare", in, primary.name(), primary.evaluator(), primary.evaluation(),
                     primary.search(), extras, output, spec.commandLine().getOut(), err);
         }
@@ -229,7 +227,7 @@ final class CompareCommand implements Callable<Integer> {
                 + "is that of " + primary.name() + ". Costs in " + (currency.isEmpty() ? "the catalog's currency" : currency) + ".";
         ReportModel.Section section = new ReportModel.Section("Footprints compared", List.of(intro),
                 List.of(new ReportModel.Table("Side by side", headers, table)), List.of());
-        return new RunExtras(List.of(section), json -> {
+        return RunExtras.of(List.of(section), json -> {
             json.put("compare_bank_given", givenBank);
             json.put("compare_time_limit_each_s", each.timeLimit().toNanos() / 1e9);
             ArrayNode arr = json.putArray("footprints");
@@ -254,6 +252,6 @@ final class CompareCommand implements Callable<Integer> {
                 imp.put("ripple_db", e.impedance().rippleDb());
                 r.search().ifPresent(s -> o.put("search_time_s", s.seconds()));
             }
-        }, c.toString(), m -> Overlays.withWorstCase(Overlays.withImpedance(m, z), w), true, "");
+        }, c.toString()).withModel(m -> Overlays.withWorstCase(Overlays.withImpedance(m, z), w));
     }
 }

@@ -61,7 +61,8 @@ final class MonteCarloOptions {
         }
         double seconds = (System.nanoTime() - t0) / 1e9;
         return RunExtras.of(List.of(MonteCarloReport.section(r, seconds)),
-                json -> MonteCarloReport.summary(json, r, seconds), MonteCarloReport.console(r, seconds));
+                json -> MonteCarloReport.summary(json, r, seconds), MonteCarloReport.console(r, seconds))
+                .withYield(r.yieldFraction());
     }
 
     /** "20", "20%", "20 %" are all 20 %. */

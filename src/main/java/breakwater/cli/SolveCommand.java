@@ -131,8 +131,6 @@ final class SolveCommand implements Callable<Integer> {
         boolean met = kept >= marginV - 1e-9;
         String line = String.format(Locale.ROOT, "Margin     %s required inside the tolerance band (%s), %s kept: %s",
                 format(marginV, VOLTAGE), source, format(kept, VOLTAGE), met ? "met" : "NOT MET");
-        String why = String.format(Locale.ROOT, "the margin kept (%s) is less than the %s required by %s",
-                format(kept, VOLTAGE), format(marginV, VOLTAGE), source);
         ReportModel.Section section = ReportModel.Section.text("Required margin", String.format(Locale.ROOT,
                 "The run asked for the worst-case droop and overshoot to stay at least %s inside the tolerance band "
                         + "(%s), as a design margin for part spread and model error. Margin kept: %s (%s).",
@@ -140,7 +138,7 @@ final class SolveCommand implements Callable<Integer> {
         return RunExtras.of(List.of(section), summary -> {
             summary.put("required_margin_v", marginV);
             summary.put("required_margin_met", met);
-        }, line).withModeCondition(met, why);
+        }, line).withFailure(met, new breakwater.design.Verdict.MarginNotKept(kept, marginV, source)).withMarginAsked();
     }
 
     @Override

@@ -198,7 +198,7 @@ final class TrimCommand implements Callable<Integer> {
             return Overlays.withKeyFigure(r, new ReportModel.KeyFigure("Savings per board",
                     Text.money(savings) + cur + (d.unchanged() ? " (unchanged)" : "")));
         };
-        return new RunExtras(List.of(section), json -> {
+        return RunExtras.of(List.of(section), json -> {
             ObjectNode t = json.putObject("trim");
             t.put("keep", keep.name().toLowerCase(Locale.ROOT));
             t.put("unchanged", d.unchanged());
@@ -221,6 +221,6 @@ final class TrimCommand implements Callable<Integer> {
                 o.put("from", ch.from());
                 o.put("to", ch.to());
             }
-        }, c.toString(), model, kept, kept ? "" : "TRIM LOST MARGIN: the result is worse than the existing bank");
+        }, c.toString()).withModel(model).withFailure(kept, new breakwater.design.Verdict.TrimLostMargin());
     }
 }

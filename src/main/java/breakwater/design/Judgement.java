@@ -19,8 +19,8 @@ public record Judgement(double droopV, double overshootV, double droopExcessV, d
                         int boardExcess, double targetExcess, double costTotal, double rippleDb,
                         double peakOverTarget, int totalParts) {
 
-    /** Meets every hard requirement: worst case inside the tolerance, board limits, target if required. */
+    /** Meets the spec by {@link Verdict#meetsSpec(double, double, int, boolean)}, the rule the full verdict uses. */
     public boolean feasible() {
-        return droopExcessV <= 0 && overshootExcessV <= 0 && boardExcess == 0 && targetExcess <= 0;
+        return Verdict.meetsSpec(droopExcessV, overshootExcessV, boardExcess, !(targetExcess <= 0));
     }
 }

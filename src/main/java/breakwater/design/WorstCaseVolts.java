@@ -48,8 +48,9 @@ public record WorstCaseVolts(double droopV, double overshootV, double operatingV
         return Math.max(0, maxVoltageV - upperLimitV);
     }
 
+    /** V_min and V_max both inside the limits ({@link Verdict#insideBand}). */
     public boolean passes() {
-        return minVoltageV >= lowerLimitV && maxVoltageV <= upperLimitV;
+        return Verdict.insideBand(droopExcessV(), overshootExcessV());
     }
 
     /** Smallest distance to either limit; negative when a limit is crossed. */

@@ -6,6 +6,7 @@ import breakwater.design.BankEvaluator;
 import breakwater.design.CapacitorBank;
 import breakwater.design.Evaluation;
 import breakwater.design.Limits;
+import breakwater.design.Verdict;
 import breakwater.scenario.Scenario;
 
 import java.util.ArrayList;
@@ -85,7 +86,7 @@ public final class CostDown {
 
     /** Inside the judge's limits, within the board limits, and under the target when the scenario asks. */
     public static boolean meets(BankEvaluator judge, Evaluation e) {
-        return e.figures().passes() && e.fitsBoard() && (!judge.scenario().requireTarget() || e.impedance().underTarget());
+        return Verdict.meetsSpec(e, judge.scenario().requireTarget());
     }
 
     /** Per part, old count to new count, for every part whose count differs (existing order, then new parts). */

@@ -2,6 +2,7 @@ package breakwater.report;
 
 import breakwater.catalog.BankEntry;
 import breakwater.design.Evaluation;
+import breakwater.design.Verdict;
 import breakwater.network.AntiResonance;
 import breakwater.optimize.SearchResult;
 import breakwater.scenario.Rail;
@@ -30,8 +31,9 @@ public final class ReportBuilder {
     }
 
     /** Everything a run knows about its bank, for the report. */
-    public record Run(String mode, Scenario scenario, String footprintName, Evaluation evaluation, Waveform droop,
-                      Waveform overshoot, Optional<SearchResult> search, List<ReportModel.Section> extraSections) {
+    public record Run(String mode, Scenario scenario, String footprintName, Evaluation evaluation, Verdict verdict,
+                      Waveform droop, Waveform overshoot, Optional<SearchResult> search,
+                      List<ReportModel.Section> extraSections) {
         public Run {
             extraSections = List.copyOf(extraSections);
         }
@@ -56,10 +58,7 @@ public final class ReportBuilder {
                 + (run.footprintName().isEmpty() ? "" : "; footprint " + run.footprintName()));
         subtitle.add("Scenario " + s.source() + (s.requireTarget() ? "; |Z| must also stay under the target" : ""));
 
-        boolean meets = Verdicts.meetsSpec(s, e);
-        ReportModel.Verdict verdict = new ReportModel.Verdict(meets,
-                meets ? "Meets the spec: the exact worst case stays inside the tolerance band"
-                        : "Does not meet the spec", Verdicts.reasons(s, e));
+        ReportModel.Verdict verdict = Verdicts.report(run.verdict());
 
         List<ReportModel.KeyFigure> keys = new ArrayList<>();
         ReportModel.Tone wcTone = wc.passes() ? ReportModel.Tone.GOOD : ReportModel.Tone.BAD;

@@ -221,18 +221,6 @@ class ModesCliTest {
         assertThat(t.err()).contains("existing.file: bank file not found (looked for", "existing.bank.csv");
     }
 
-    /** The rule of the caution: the yield decides when it is known, else a margin under 5 % of the allowance. */
-    @Test
-    void cautionFollowsTheYieldWhenKnownElseTheMargin() {
-        java.util.OptionalDouble none = java.util.OptionalDouble.empty();
-        assertThat(Results.needsCaution(true, 0.5e-3, 25.5e-3, none)).isTrue();   // 2 % of the allowance
-        assertThat(Results.needsCaution(true, 2e-3, 25.5e-3, none)).isFalse();    // 8 %
-        // a comfortable nominal margin with a poor yield is cautioned; a thin one with a good yield is not
-        assertThat(Results.needsCaution(true, 2e-3, 25.5e-3, java.util.OptionalDouble.of(0.727))).isTrue();
-        assertThat(Results.needsCaution(true, 0.5e-3, 25.5e-3, java.util.OptionalDouble.of(0.99))).isFalse();
-        assertThat(Results.needsCaution(false, -1e-3, 25.5e-3, none)).isFalse();  // a failure has its verdict
-    }
-
     /** The caution reaches the report too (amber verdict), and after a Monte Carlo run it gives the yield. */
     @Test
     void aCautionIsShownInTheReportWithTheYield(@TempDir Path dir) throws IOException {
