@@ -94,7 +94,7 @@ public final class Main implements Runnable {
         if (ex instanceof InputException) {
             return ExitCodes.INVALID_INPUT;
         }
-        if (ex instanceof UsageException) {
+        if (ex instanceof UsageException || ex instanceof breakwater.design.RequestRefused) {
             return ExitCodes.USAGE;
         }
         if (ex instanceof IOException || ex instanceof UncheckedIOException) {

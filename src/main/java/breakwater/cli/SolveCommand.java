@@ -4,10 +4,7 @@ import breakwater.catalog.Part;
 import breakwater.design.BankEvaluator;
 import breakwater.design.CapacitorBank;
 import breakwater.design.Evaluation;
-import breakwater.design.Limits;
-import breakwater.network.NetworkBuilder;
-import breakwater.diagnostic.Diagnostic;
-import breakwater.diagnostic.InputException;
+import breakwater.design.DesignMargin;
 import breakwater.optimize.BankSearch;
 import breakwater.optimize.MaxCounts;
 import breakwater.optimize.SearchResult;
@@ -91,44 +88,14 @@ final class SolveCommand implements Callable<Integer> {
     }
 
     /**
-     * The judge the search uses with a design margin: the tolerance band narrowed by the margin on both
-     * sides. A margin that leaves no room on one side is refused, saying how much room there is: a usage
-     * error for --margin, an input error for the scenario's solver.margin.
-     *
-     * @param source "--margin" or "solver.margin", where the margin was given
-     */
-    static BankEvaluator narrowed(BankEvaluator spec, double marginV, String source) throws InputException {
-        Limits band = spec.limits();
-        double op = spec.operatingPointV();
-        double below = op - band.lowerV();
-        double above = band.upperV() - op;
-        // no bank droops less than ΔI·Z(0) (where its step response settles: final value theorem), so the
-        // droop side has that much less room than the band; a margin of the whole room leaves nothing
-        double settle = spec.scenario().rail().currentStepA()
-                * NetworkBuilder.build(spec.scenario(), List.of(), spec.footprint()).dcResistanceOhms();
-        double room = Math.min(below - settle, above);
-        if (!(marginV < room * (1 - 1e-9))) {
-            String message = String.format(Locale.ROOT, "%s %s leaves no room: from the %s operating point the "
-                            + "tolerance band allows %s of droop and %s of overshoot, and no bank droops less than "
-                            + "ΔI·Z(0) = %s; choose a margin below %s", source,
-                    format(marginV, VOLTAGE), format(op, VOLTAGE, 5), format(below, VOLTAGE), format(above, VOLTAGE),
-                    format(settle, VOLTAGE), format(room, VOLTAGE));
-            if (source.startsWith("--")) {
-                throw new UsageException(message);
-            }
-            throw new InputException(Diagnostic.of(spec.scenario().source(), message));
-        }
-        return spec.withLimits(new Limits(band.lowerV() + marginV, band.upperV() - marginV));
-    }
-
-    /**
      * The margin the run asked for (from {@code source}): summary key, console line, report section, and
      * its condition for exit 0.
      */
-    static RunExtras marginExtras(Evaluation e, double marginV, String source) {
-        double kept = e.figures().marginV();
-        // the search judged the same worst case (to rounding): allow a nanovolt
-        boolean met = kept >= marginV - 1e-9;
+    static RunExtras marginExtras(DesignMargin.Kept k) {
+        double marginV = k.asked().marginV();
+        String source = k.asked().source();
+        double kept = k.keptV();
+        boolean met = k.met();
         String line = String.format(Locale.ROOT, "Margin     %s required inside the tolerance band (%s), %s kept: %s",
                 format(marginV, VOLTAGE), source, format(kept, VOLTAGE), met ? "met" : "NOT MET");
         ReportModel.Section section = ReportModel.Section.text("Required margin", String.format(Locale.ROOT,
@@ -138,7 +105,7 @@ final class SolveCommand implements Callable<Integer> {
         return RunExtras.of(List.of(section), summary -> {
             summary.put("required_margin_v", marginV);
             summary.put("required_margin_met", met);
-        }, line).withFailure(met, new breakwater.design.Verdict.MarginNotKept(kept, marginV, source)).withMarginAsked();
+        }, line).withFailure(met, k.failure().orElse(null)).withMarginAsked();
     }
 
     @Override
@@ -147,8 +114,10 @@ final class SolveCommand implements Callable<Integer> {
         BankEvaluator evaluator = new BankEvaluator(in.scenario(), in.footprint());
         // --margin overrides the scenario's [solver] margin
         double margin = marginV != null ? marginV : in.scenario().designMarginV();
-        String marginSource = marginV != null ? "--margin" : "solver.margin";
-        BankEvaluator searchJudge = margin > 0 ? narrowed(evaluator, margin, marginSource) : evaluator;
+        java.util.Optional<DesignMargin> asked = margin > 0
+                ? java.util.Optional.of(new DesignMargin(margin, marginV != null ? "--margin" : "solver.margin", marginV == null))
+                : java.util.Optional.empty();
+        BankEvaluator searchJudge = asked.isPresent() ? asked.get().narrow(evaluator) : evaluator;
         List<Part> candidates = in.catalog().parts();
         int[] max = MaxCounts.of(candidates, in.scenario());
         SearchSettings settings = search.settings(in.scenario());
@@ -168,8 +137,8 @@ final class SolveCommand implements Callable<Integer> {
                     searchJudge);
             Evaluation e = evaluator.evaluate(result.bank());
             RunExtras extras = monteCarlo.run(evaluator, e.bank(), in.scenario(), output.quiet, err);
-            if (margin > 0) {
-                extras = extras.plus(marginExtras(e, margin, marginSource));
+            if (asked.isPresent()) {
+                extras = extras.plus(marginExtras(asked.get().kept(e)));
             }
             return Results.emit("solve", in, output.footprint, evaluator, e, java.util.Optional.of(result), extras,
                     output, spec.commandLine().getOut(), err);
