@@ -1,19 +1,15 @@
 package breakwater.cli;
 
-import breakwater.catalog.BankEntry;
-import breakwater.catalog.BankFileReader;
 import breakwater.design.BankEvaluator;
-import breakwater.design.CapacitorBank;
-import breakwater.design.Evaluation;
+import breakwater.design.CheckResult;
+import breakwater.report.CheckReport;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
 
 import java.nio.file.Path;
-import java.util.List;
 import java.util.concurrent.Callable;
 
 /** {@code breakwater check SCENARIO --bank FILE}: judges a given bank. */
@@ -26,8 +22,8 @@ final class CheckCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "SCENARIO", description = "Rail scenario (TOML).")
-    Path scenarioFile;
+    @Mixin
+    ScenarioArgument scenario;
 
     @Option(names = "--bank", required = true, paramLabel = "FILE", description = "Bank to judge (CSV: part,count).")
     Path bankFile;
@@ -40,13 +36,14 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Inputs in = Inputs.load(scenarioFile, output.footprint);
-        List<BankEntry> entries = BankFileReader.read(bankFile, Inputs.display(bankFile), in.catalog());
-        BankEvaluator evaluator = new BankEvaluator(in.scenario(), in.footprint());
-        Evaluation e = evaluator.evaluate(new CapacitorBank(entries));
-        RunExtras mc = monteCarlo.run(evaluator, e.bank(), in.scenario(), output.quiet || output.json,
-                spec.commandLine().getErr());
-        return Results.emit("check", in, output.footprint, evaluator, e, java.util.Optional.empty(), mc, output,
-                spec.commandLine().getOut(), spec.commandLine().getErr());
+        Inputs in = scenario.load(output.footprint);
+        var bank = in.bank(bankFile);
+        BankEvaluator judge = new BankEvaluator(in.scenario(), in.footprint());
+        try (Searches progress = new Searches(spec.commandLine().getErr(), output.silent(), false)) {
+            CheckResult r = CheckResult.check(judge, output.footprint, bank, monteCarlo.settings(in.scenario()),
+                    progress);
+            CheckReport.write(r, output.target(), spec.commandLine().getOut());
+            return ExitCodes.of(r.verdict());
+        }
     }
 }

@@ -33,14 +33,6 @@ final class Durations {
         return Duration.ofNanos(Math.round(seconds * 1e9));
     }
 
-    static String describe(Duration d) {
-        double s = d.toNanos() / 1e9;
-        if (s >= 120) {
-            return String.format(Locale.ROOT, "%.4g min", s / 60);
-        }
-        return String.format(Locale.ROOT, "%.4g s", s);
-    }
-
     static final class Converter implements CommandLine.ITypeConverter<Duration> {
         @Override
         public Duration convert(String value) {

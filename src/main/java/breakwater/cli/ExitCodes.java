@@ -1,5 +1,7 @@
 package breakwater.cli;
 
+import breakwater.design.Verdict;
+
 /** Process exit codes (DESIGN.md §4), shown in {@code --help}. */
 public final class ExitCodes {
     /** Success: the bank meets the spec. */
@@ -16,5 +18,10 @@ public final class ExitCodes {
     public static final int INTERNAL = 70;
 
     private ExitCodes() {
+    }
+
+    /** The exit code of a run with this verdict: the run as a whole meets the spec, or it does not. */
+    static int of(Verdict verdict) {
+        return verdict.meetsSpec() ? OK : SPEC_NOT_MET;
     }
 }

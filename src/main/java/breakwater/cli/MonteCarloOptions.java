@@ -1,16 +1,11 @@
 package breakwater.cli;
 
-import breakwater.design.BankEvaluator;
-import breakwater.design.CapacitorBank;
 import breakwater.design.MonteCarlo;
-import breakwater.report.MonteCarloReport;
 import breakwater.scenario.Scenario;
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
 
-import java.io.PrintWriter;
-import java.util.List;
-import java.util.Locale;
+import java.util.Optional;
 
 /** {@code --monte-carlo N}, {@code --mc-seed}, {@code --spread}: part-to-part spread of the chosen bank. */
 final class MonteCarloOptions {
@@ -37,32 +32,13 @@ final class MonteCarloOptions {
         return samples > 0;
     }
 
-    /**
-     * Runs the samples on {@code bank} against {@code evaluator}'s limits (pass the rail's own evaluator:
-     * the yield is against the spec), or nothing when --monte-carlo is absent.
-     */
-    RunExtras run(BankEvaluator evaluator, CapacitorBank bank, Scenario scenario, boolean quiet, PrintWriter err) {
+    /** The draws asked for (seed: --mc-seed, else the scenario's [solver] seed), or none without --monte-carlo. */
+    Optional<MonteCarlo.Settings> settings(Scenario scenario) {
         if (!enabled()) {
-            return RunExtras.NONE;
+            return Optional.empty();
         }
-        long s = seed != null ? seed : scenario.solver().seed();
-        MonteCarlo.Settings settings = new MonteCarlo.Settings(samples, s, spreadFraction);
-        if (!quiet) {
-            err.printf(Locale.ROOT, "breakwater: Monte Carlo, %d samples on %d cores, seed %d%n", samples,
-                    Runtime.getRuntime().availableProcessors(), s);
-            err.flush();
-        }
-        long t0 = System.nanoTime();
-        MonteCarlo.Result r;
-        try {
-            r = MonteCarlo.run(evaluator, bank, settings);
-        } catch (IllegalArgumentException e) {
-            throw new UsageException("--monte-carlo: " + e.getMessage());
-        }
-        double seconds = (System.nanoTime() - t0) / 1e9;
-        return RunExtras.of(List.of(MonteCarloReport.section(r, seconds)),
-                json -> MonteCarloReport.summary(json, r, seconds), MonteCarloReport.console(r, seconds))
-                .withYield(r.yieldFraction());
+        return Optional.of(new MonteCarlo.Settings(samples, seed != null ? seed : scenario.solver().seed(),
+                spreadFraction));
     }
 
     /** "20", "20%", "20 %" are all 20 %. */

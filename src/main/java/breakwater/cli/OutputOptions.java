@@ -1,5 +1,6 @@
 package breakwater.cli;
 
+import breakwater.report.ResultWriter;
 import picocli.CommandLine.Option;
 
 import java.nio.file.Path;
@@ -41,5 +42,15 @@ final class OutputOptions {
 
     Optional<Path> outDir() {
         return Optional.ofNullable(out);
+    }
+
+    /** Where the results go; {@code quiet} also when the JSON takes standard output. */
+    ResultWriter.Target target() {
+        return new ResultWriter.Target(json, quiet, outDir(), out == null ? "" : Inputs.display(out));
+    }
+
+    /** No progress on the error stream: --quiet, or --json (the JSON alone on standard output). */
+    boolean silent() {
+        return quiet || json;
     }
 }

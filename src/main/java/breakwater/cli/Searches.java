@@ -2,36 +2,44 @@ package breakwater.cli;
 
 import breakwater.design.BankEvaluator;
 import breakwater.design.CapacitorBank;
-import breakwater.design.Judgement;
+import breakwater.design.MonteCarlo;
 import breakwater.optimize.BankSearch;
-import breakwater.optimize.SearchProgress;
 import breakwater.optimize.SearchResult;
+import breakwater.optimize.SearchRunner;
 import breakwater.optimize.SearchSettings;
-import breakwater.scenario.Scenario;
+import breakwater.optimize.SearchStage;
+import breakwater.report.ProgressText;
 
 import java.io.PrintWriter;
-import java.util.Locale;
+import java.util.Optional;
 
-import static breakwater.units.EngineeringNotation.format;
-import static breakwater.units.Quantity.VOLTAGE;
+/**
+ * Runs a mode's searches for a person: each step announced and a live progress line once a second on the
+ * error stream (unless quiet), and, when stoppable, Ctrl-C stopping the running search and skipping the
+ * rest ({@link StopOnInterrupt}). The words come from {@link ProgressText}; this class runs the printer.
+ */
+final class Searches implements SearchRunner, AutoCloseable {
+    private final PrintWriter err;
+    private final boolean quiet;
+    private final Optional<StopOnInterrupt> guard;
 
-/** Runs a search with a live progress line on stderr (once a second) unless quiet. */
-final class Searches {
-    private Searches() {
+    /** With Ctrl-C handling when {@code stoppable} (searches), without for a run that only judges. */
+    Searches(PrintWriter err, boolean quiet, boolean stoppable) {
+        this.err = err;
+        this.quiet = quiet;
+        this.guard = stoppable ? Optional.of(new StopOnInterrupt(err)) : Optional.empty();
     }
 
-    static SearchResult runWithProgress(BankSearch search, SearchSettings settings, CapacitorBank start,
-                                        PrintWriter err, boolean quiet, BankEvaluator evaluator) {
+    @Override
+    public SearchResult run(BankSearch search, BankEvaluator judge, SearchSettings settings, CapacitorBank start) {
+        guard.ifPresent(g -> g.running(search));
         Thread printer = null;
         if (!quiet) {
             printer = new Thread(() -> {
                 try {
                     while (!Thread.currentThread().isInterrupted()) {
                         Thread.sleep(1000);
-                        search.progress().ifPresent(p -> {
-                            err.println(describe(p, evaluator));
-                            err.flush();
-                        });
+                        search.progress().ifPresent(p -> say(ProgressText.line(p, judge)));
                     }
                 } catch (InterruptedException e) {
                     // search finished
@@ -49,39 +57,33 @@ final class Searches {
         }
     }
 
-    /** One progress line: elapsed, the best bank's verdict in words, cost, worst droop, speed. */
-    static String describe(SearchProgress p, BankEvaluator evaluator) {
-        Scenario scenario = evaluator.scenario();
-        Judgement j = p.best();
-        return String.format(Locale.ROOT, "  %6.1f s  %s; cost %.4f%s; worst droop %s of %s allowed; %d parts; %.0f banks/s",
-                p.elapsedS(), inWords(j, scenario), j.costTotal(),
-                scenario.cost().currency().isEmpty() ? "" : " " + scenario.cost().currency(),
-                format(j.droopV(), VOLTAGE), format(evaluator.operatingPointV() - evaluator.limits().lowerV(), VOLTAGE), j.totalParts(),
-                p.evaluationsPerSecond());
+    @Override
+    public void announce(SearchStage stage) {
+        if (!quiet) {
+            say(ProgressText.stage(stage));
+        }
     }
 
-    /** "meets spec" or what is still missing, e.g. "misses by 3.2 mV (droop)". */
-    static String inWords(Judgement j, Scenario s) {
-        if (j.feasible()) {
-            return "meets spec";
+    @Override
+    public void monteCarloStarting(MonteCarlo.Settings settings) {
+        if (!quiet) {
+            say(ProgressText.monteCarlo(settings));
         }
-        StringBuilder b = new StringBuilder("misses");
-        String sep = " ";
-        if (j.droopExcessV() > 0) {
-            b.append(sep).append("by ").append(format(j.droopExcessV(), VOLTAGE)).append(" (droop)");
-            sep = ", ";
-        }
-        if (j.overshootExcessV() > 0) {
-            b.append(sep).append("by ").append(format(j.overshootExcessV(), VOLTAGE)).append(" (overshoot)");
-            sep = ", ";
-        }
-        if (j.boardExcess() > 0) {
-            b.append(sep).append(j.boardExcess()).append(" over board limits");
-            sep = ", ";
-        }
-        if (j.targetExcess() > 0) {
-            b.append(sep).append(String.format(Locale.ROOT, "|Z| %.1f %% over target", 100 * j.targetExcess()));
-        }
-        return b.toString();
+    }
+
+    @Override
+    public boolean stopRequested() {
+        return guard.map(StopOnInterrupt::interrupted).orElse(false);
+    }
+
+    private void say(String line) {
+        err.println(line);
+        err.flush();
+    }
+
+    @Override
+    public void close() {
+        guard.ifPresent(StopOnInterrupt::close);
+        err.flush();
     }
 }

@@ -1,34 +1,17 @@
 package breakwater.cli;
 
-import breakwater.catalog.Part;
 import breakwater.design.BankEvaluator;
-import breakwater.design.CapacitorBank;
-import breakwater.design.Evaluation;
 import breakwater.design.DesignMargin;
-import breakwater.optimize.BankSearch;
-import breakwater.optimize.MaxCounts;
-import breakwater.optimize.SearchResult;
-import breakwater.optimize.SearchSettings;
-import breakwater.report.ReportModel;
-import breakwater.units.EngineeringNotation;
-import breakwater.units.NotationException;
-import breakwater.units.Quantity;
-import picocli.CommandLine;
+import breakwater.optimize.SolveResult;
+import breakwater.report.SolveReport;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-import java.io.PrintWriter;
-import java.nio.file.Path;
-import java.util.List;
-import java.util.Locale;
+import java.util.Optional;
 import java.util.concurrent.Callable;
-
-import static breakwater.units.EngineeringNotation.format;
-import static breakwater.units.Quantity.VOLTAGE;
 
 /** {@code breakwater solve SCENARIO}: searches for the cheapest bank that meets the spec. */
 @Command(name = "solve", mixinStandardHelpOptions = true,
@@ -52,8 +35,8 @@ final class SolveCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "SCENARIO", description = "Rail scenario (TOML).")
-    Path scenarioFile;
+    @Mixin
+    ScenarioArgument scenario;
 
     @Mixin
     OutputOptions output;
@@ -70,78 +53,27 @@ final class SolveCommand implements Callable<Integer> {
                     + "else none.")
     Double marginV;
 
-    /** Parses a voltage in engineering notation ("1 mV", "0.5m", "1e-3"). */
-    static final class VoltageConverter implements CommandLine.ITypeConverter<Double> {
-        @Override
-        public Double convert(String value) {
-            double v;
-            try {
-                v = EngineeringNotation.parse(value, Quantity.VOLTAGE);
-            } catch (NotationException e) {
-                throw new CommandLine.TypeConversionException(e.getMessage());
-            }
-            if (!(v >= 0)) {
-                throw new CommandLine.TypeConversionException("a margin must be at least 0 V, got '" + value + "'");
-            }
-            return v;
+    /** --margin, else the scenario's [solver] margin, else none. */
+    Optional<DesignMargin> margin(double scenarioMarginV) {
+        if (marginV != null) {
+            return marginV > 0 ? Optional.of(new DesignMargin(marginV, "--margin", false)) : Optional.empty();
         }
-    }
-
-    /**
-     * The margin the run asked for (from {@code source}): summary key, console line, report section, and
-     * its condition for exit 0.
-     */
-    static RunExtras marginExtras(DesignMargin.Kept k) {
-        double marginV = k.asked().marginV();
-        String source = k.asked().source();
-        double kept = k.keptV();
-        boolean met = k.met();
-        String line = String.format(Locale.ROOT, "Margin     %s required inside the tolerance band (%s), %s kept: %s",
-                format(marginV, VOLTAGE), source, format(kept, VOLTAGE), met ? "met" : "NOT MET");
-        ReportModel.Section section = ReportModel.Section.text("Required margin", String.format(Locale.ROOT,
-                "The run asked for the worst-case droop and overshoot to stay at least %s inside the tolerance band "
-                        + "(%s), as a design margin for part spread and model error. Margin kept: %s (%s).",
-                format(marginV, VOLTAGE), source, format(kept, VOLTAGE), met ? "met" : "not met"));
-        return RunExtras.of(List.of(section), summary -> {
-            summary.put("required_margin_v", marginV);
-            summary.put("required_margin_met", met);
-        }, line).withFailure(met, k.failure().orElse(null)).withMarginAsked();
+        return scenarioMarginV > 0 ? Optional.of(new DesignMargin(scenarioMarginV, "solver.margin", true))
+                : Optional.empty();
     }
 
     @Override
     public Integer call() throws Exception {
-        Inputs in = Inputs.load(scenarioFile, output.footprint);
-        BankEvaluator evaluator = new BankEvaluator(in.scenario(), in.footprint());
-        // --margin overrides the scenario's [solver] margin
-        double margin = marginV != null ? marginV : in.scenario().designMarginV();
-        java.util.Optional<DesignMargin> asked = margin > 0
-                ? java.util.Optional.of(new DesignMargin(margin, marginV != null ? "--margin" : "solver.margin", marginV == null))
-                : java.util.Optional.empty();
-        BankEvaluator searchJudge = asked.isPresent() ? asked.get().narrow(evaluator) : evaluator;
-        List<Part> candidates = in.catalog().parts();
-        int[] max = MaxCounts.of(candidates, in.scenario());
-        SearchSettings settings = search.settings(in.scenario());
-        BankSearch bankSearch = new BankSearch(searchJudge, candidates, max);
-
-        PrintWriter err = spec.commandLine().getErr();
-        if (!output.quiet) {
-            err.printf(Locale.ROOT, "breakwater: searching %d parts for up to %s with %d solver%s, seed %d%s%n",
-                    candidates.size(), Durations.describe(settings.timeLimit()), settings.solvers(),
-                    settings.solvers() == 1 ? "" : "s", settings.seed(),
-                    settings.moveLimit() > 0 ? ", move limit " + settings.moveLimit() : "");
-            err.flush();
-        }
-        try (StopOnInterrupt guard = new StopOnInterrupt(bankSearch, err)) {
-            // progress in the search's own terms: with --margin, "allowed" is the narrowed band
-            SearchResult result = Searches.runWithProgress(bankSearch, settings, CapacitorBank.EMPTY, err, output.quiet,
-                    searchJudge);
-            Evaluation e = evaluator.evaluate(result.bank());
-            RunExtras extras = monteCarlo.run(evaluator, e.bank(), in.scenario(), output.quiet, err);
-            if (asked.isPresent()) {
-                extras = extras.plus(marginExtras(asked.get().kept(e)));
-            }
-            return Results.emit("solve", in, output.footprint, evaluator, e, java.util.Optional.of(result), extras,
-                    output, spec.commandLine().getOut(), err);
+        Inputs in = scenario.load(output.footprint);
+        BankEvaluator judge = new BankEvaluator(in.scenario(), in.footprint());
+        var settings = search.settings(in.scenario());
+        var draws = monteCarlo.settings(in.scenario());
+        // progress stays on the error stream with --json (only --quiet silences it)
+        try (Searches progress = new Searches(spec.commandLine().getErr(), output.quiet, true)) {
+            SolveResult r = SolveResult.solve(judge, output.footprint, in.catalog().parts(), settings,
+                    margin(in.scenario().designMarginV()), draws, progress);
+            SolveReport.write(r, output.target(), spec.commandLine().getOut());
+            return ExitCodes.of(r.verdict());
         }
     }
 }

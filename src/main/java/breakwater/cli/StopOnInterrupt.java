@@ -43,11 +43,6 @@ final class StopOnInterrupt implements AutoCloseable {
         previous = installed;
     }
 
-    StopOnInterrupt(BankSearch search, PrintWriter err) {
-        this(err);
-        running(search);
-    }
-
     /** The search now running; stopped at once if Ctrl-C came already. */
     void running(BankSearch search) {
         current = search;

@@ -9,6 +9,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.SplittableRandom;
 import java.util.stream.IntStream;
 
@@ -126,9 +127,10 @@ public final class MonteCarlo {
      * @param droopV      worst droop of each sample, by sample index
      * @param overshootV  worst overshoot of each sample, by sample index
      * @param passing     samples whose V_min and V_max stay inside the evaluator's limits
+     * @param seconds     wall-clock time the run took (not part of equality: no two runs share it)
      */
     public record Result(Settings settings, List<PartSpread> parts, WorstCaseVolts nominal, double[] droopV,
-                         double[] overshootV, int passing) {
+                         double[] overshootV, int passing, double seconds) {
         public Result {
             parts = List.copyOf(parts);
             droopV = droopV.clone();
@@ -186,6 +188,7 @@ public final class MonteCarlo {
      * @throws IllegalArgumentException when a part's capacitance tolerance is not in [0, 1)
      */
     public static Result run(BankEvaluator evaluator, CapacitorBank bank, Settings settings) {
+        long t0 = System.nanoTime();
         List<BankEntry> entries = bank.entries();
         int n = entries.size();
         double[] tol = new double[n];
@@ -222,7 +225,29 @@ public final class MonteCarlo {
         }
         WorstCaseVolts nominal = evaluator.worstCaseVolts(
                 NetworkBuilder.build(evaluator.scenario(), entries, evaluator.footprint()));
-        return new Result(settings, spreads, nominal, droop, over, passing);
+        return new Result(settings, spreads, nominal, droop, over, passing, (System.nanoTime() - t0) / 1e9);
+    }
+
+    /** The yield of a Monte Carlo run, when there was one. */
+    public static java.util.OptionalDouble yieldOf(Optional<Result> run) {
+        return run.map(r -> java.util.OptionalDouble.of(r.yieldFraction())).orElse(java.util.OptionalDouble.empty());
+    }
+
+    /**
+     * The samples a run asked for, or none: announced to {@code listener} first; a tolerance the draws
+     * cannot use is refused as a request ({@link RequestRefused}) naming the option.
+     */
+    public static Optional<Result> runRequested(BankEvaluator evaluator, CapacitorBank bank,
+                                                Optional<Settings> settings, RunListener listener) {
+        if (settings.isEmpty()) {
+            return Optional.empty();
+        }
+        listener.monteCarloStarting(settings.get());
+        try {
+            return Optional.of(run(evaluator, bank, settings.get()));
+        } catch (IllegalArgumentException e) {
+            throw new RequestRefused("--monte-carlo: " + e.getMessage());
+        }
     }
 
     /** One sample: every part type drawn once from its own generator seeded with {@code sampleSeed}. */

@@ -70,6 +70,16 @@ public final class CostDown {
         return max;
     }
 
+    /**
+     * The keep rule, judged on full evaluations against the real limits: {@link Keep#SPEC} always holds
+     * here (the verdict judges the spec); {@link Keep#MARGIN} holds when the result's worst droop and worst
+     * overshoot are each no worse than the existing bank's.
+     */
+    public static boolean keeps(Keep keep, Evaluation existing, Evaluation result) {
+        return keep == Keep.SPEC || (result.figures().droopV() <= existing.figures().droopV()
+                && result.figures().overshootV() <= existing.figures().overshootV());
+    }
+
     /** Takes {@code found} only when it is strictly cheaper than {@code existing} and meets {@code judge}. */
     public static Decision decide(BankEvaluator judge, CapacitorBank existing, CapacitorBank found) {
         Evaluation old = judge.evaluate(existing);

@@ -5,6 +5,8 @@ import breakwater.design.BankEvaluator;
 import breakwater.design.CapacitorBank;
 import breakwater.design.Evaluation;
 import breakwater.design.Limits;
+import breakwater.design.Verdict;
+import breakwater.scenario.Rail;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -75,6 +77,34 @@ public final class ExcursionFrontier {
         public Result {
             points = List.copyOf(points);
         }
+
+        /** The last point: the spec's own limit. */
+        public Point specPoint() {
+            return points.get(points.size() - 1);
+        }
+
+        /** What the spec allows on each side, from the first point's bank. */
+        public Headroom headroom(Rail rail) {
+            Evaluation first = points.get(0).evaluation();
+            double op = first.figures().operatingV();
+            return new Headroom(op, op - rail.lowerLimitV(), rail.upperLimitV() - op,
+                    rail.currentStepA() * first.network().dcResistanceOhms());
+        }
+    }
+
+    /**
+     * What the spec allows from the operating point, and why the limits end where they do.
+     *
+     * @param operatingV        the I_min operating point
+     * @param droopAllowedV     room below it, to the lower limit
+     * @param overshootAllowedV room above it, to the upper limit
+     * @param settleV           ΔI·Z(0): every worst overshoot is the worst droop less this
+     */
+    public record Headroom(double operatingV, double droopAllowedV, double overshootAllowedV, double settleV) {
+        /** Whether the two sides differ (then the limits end before the larger side's room). */
+        public boolean asymmetric() {
+            return Math.abs(droopAllowedV - overshootAllowedV) > 1e-12;
+        }
     }
 
     /**
@@ -103,7 +133,7 @@ public final class ExcursionFrontier {
         for (int i = 0; i < k; i++) {
             double limit = k == 1 ? allowed : i == k - 1 ? allowed : lo + (allowed - lo) * i / (k - 1);
             BankEvaluator judge = judge(spec, limit);
-            CapacitorBank start = CostDown.meets(judge, judge.evaluate(previous)) ? previous : CapacitorBank.EMPTY;
+            CapacitorBank start = Verdict.meetsSpec(judge.evaluate(previous), spec.scenario().requireTarget()) ? previous : CapacitorBank.EMPTY;
             Evaluation found;
             boolean searched = !stopped.getAsBoolean();
             long evaluations = 0;
@@ -116,7 +146,7 @@ public final class ExcursionFrontier {
             } else {
                 found = judge.evaluate(start);
             }
-            boolean meets = CostDown.meets(judge, found);
+            boolean meets = Verdict.meetsSpec(found, spec.scenario().requireTarget());
             String note = searched ? "" : "not searched (stopped by the user)";
             // the cheapest bank of a tighter limit that met it meets this limit too
             Point cheaperTighter = null;

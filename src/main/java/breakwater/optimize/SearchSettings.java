@@ -51,4 +51,11 @@ public record SearchSettings(Duration timeLimit, Duration unimprovedLimit, long 
     public SearchSettings withSolvers(int n) {
         return new SearchSettings(timeLimit, unimprovedLimit, moveLimit, seed, n);
     }
+
+    /** An equal share of the time limit for each of {@code parts} searches; moves, seed, solvers unchanged. */
+    public SearchSettings split(int parts) {
+        Duration t = timeLimit.dividedBy(Math.max(1, parts));
+        Duration unimproved = unimprovedLimit.compareTo(t) < 0 ? unimprovedLimit : t;
+        return new SearchSettings(t, unimproved, moveLimit, seed, solvers);
+    }
 }

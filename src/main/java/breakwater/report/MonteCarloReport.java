@@ -16,13 +16,20 @@ public final class MonteCarloReport {
     private MonteCarloReport() {
     }
 
+    /** The run's console text, summary keys and report section together; nothing when there was no run. */
+    static ModeOutput output(java.util.Optional<MonteCarlo.Result> run) {
+        return run.map(r -> new ModeOutput(console(r), json -> summary(json, r), List.of(section(r))))
+                .orElse(ModeOutput.NONE);
+    }
+
     /** Bins of the histograms: about √N, between 10 and 60. */
     static int bins(int samples) {
         return (int) Math.max(10, Math.min(60, Math.round(Math.sqrt(samples))));
     }
 
-    public static String console(MonteCarlo.Result r, double seconds) {
+    public static String console(MonteCarlo.Result r) {
         var s = r.settings();
+        double seconds = r.seconds();
         var nom = r.nominal();
         var d = r.droop();
         var o = r.overshoot();
@@ -47,8 +54,9 @@ public final class MonteCarloReport {
         return b.toString();
     }
 
-    public static ReportModel.Section section(MonteCarlo.Result r, double seconds) {
+    public static ReportModel.Section section(MonteCarlo.Result r) {
         var s = r.settings();
+        double seconds = r.seconds();
         var nom = r.nominal();
         double allowedDroop = nom.operatingV() - nom.lowerLimitV();
         double allowedOver = nom.upperLimitV() - nom.operatingV();
@@ -87,8 +95,9 @@ public final class MonteCarloReport {
     }
 
     /** Adds {@code monte_carlo} to summary.json. */
-    public static void summary(ObjectNode root, MonteCarlo.Result r, double seconds) {
+    public static void summary(ObjectNode root, MonteCarlo.Result r) {
         var s = r.settings();
+        double seconds = r.seconds();
         ObjectNode mc = root.putObject("monte_carlo");
         mc.put("samples", s.samples());
         mc.put("seed", s.seed());

@@ -2,8 +2,10 @@ package breakwater.report;
 
 import breakwater.catalog.BankEntry;
 import breakwater.design.BoardCheck;
+import breakwater.design.CapacitorBank;
 import breakwater.design.Evaluation;
 import breakwater.network.AntiResonance;
+import breakwater.optimize.SearchResult;
 import breakwater.scenario.Rail;
 import breakwater.scenario.Scenario;
 import com.fasterxml.jackson.core.JsonGenerator;
@@ -121,6 +123,23 @@ public final class SummaryJson {
             o.put("actual", v.actual());
         }
         return root;
+    }
+
+    /** Adds {@code solver}: how the search went (seed, solvers, time, evaluations, whether stopped early). */
+    public static void solver(ObjectNode root, SearchResult r) {
+        ObjectNode s = root.putObject("solver");
+        s.put("seed", r.seed());
+        s.put("solvers", r.solvers());
+        s.put("time_s", r.seconds());
+        s.put("evaluations", r.evaluations());
+        s.put("stopped_early", r.stoppedEarly());
+    }
+
+    /** A bank as an array of {@code {part, count}}. */
+    static void bank(ArrayNode array, CapacitorBank bank) {
+        for (BankEntry be : bank.entries()) {
+            array.addObject().put("part", be.part().name()).put("count", be.count());
+        }
     }
 
     /** JSON has no NaN: a figure that does not exist is written as null. */

@@ -1,0 +1,106 @@
+package breakwater.report;
+
+import breakwater.design.BankEvaluator;
+import breakwater.design.Evaluation;
+import breakwater.design.Verdict;
+import breakwater.optimize.SearchResult;
+import breakwater.timedomain.Waveform;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Objects;
+import java.util.Optional;
+
+/**
+ * Writes what a run found: the console text or summary.json on standard output, and the result files of
+ * {@code --out}, each written atomically ({@link OutputDirectory}). The mode reporters call it with the
+ * bank the run shows and what their mode adds.
+ */
+public final class ResultWriter {
+    private ResultWriter() {
+    }
+
+    /**
+     * Where the results go.
+     *
+     * @param json       print summary.json instead of the console text
+     * @param quiet      print nothing (but the JSON with {@code json})
+     * @param outDir     the folder for the result files, if any
+     * @param outDirName how the user knows that folder (in the "Wrote ..." line)
+     */
+    public record Target(boolean json, boolean quiet, Optional<Path> outDir, String outDirName) {
+        public Target {
+            Objects.requireNonNull(outDir, "outDir");
+            Objects.requireNonNull(outDirName, "outDirName");
+        }
+    }
+
+    /**
+     * The bank a run shows and the run's verdict.
+     *
+     * @param mode          the command ("check", "solve", ...), written into summary.json and the report
+     * @param footprintName the footprint of {@code evaluation} ("" for the catalog's mounting inductance)
+     * @param judge         the rail's own judge of {@code evaluation}
+     */
+    record Shown(String mode, String footprintName, BankEvaluator judge, Evaluation evaluation,
+                 Optional<SearchResult> search, Verdict verdict) {
+    }
+
+    static void write(Shown run, ModeOutput mode, Target target, PrintWriter out) throws IOException {
+        var scenario = run.judge().scenario();
+        Evaluation e = run.evaluation();
+        ObjectNode summary = SummaryJson.of(run.mode(), scenario, run.footprintName(), e);
+        summary.put("meets_spec", run.verdict().meetsSpec());
+        run.search().ifPresent(r -> SummaryJson.solver(summary, r));
+        mode.summary().accept(summary);
+        if (target.json()) {
+            StringWriter sw = new StringWriter();
+            SummaryJson.write(summary, sw);
+            out.print(sw);
+        } else if (!target.quiet()) {
+            out.print(ConsoleReport.render(scenario, run.footprintName(), e));
+            run.search().ifPresent(r -> out.printf(Locale.ROOT, "%nSearch     %d banks evaluated in %.1f s by %d "
+                            + "solver%s, seed %d%s%n", r.evaluations(), r.seconds(), r.solvers(), Texts.plural(r.solvers()),
+                    r.seed(), r.stoppedEarly() ? " (stopped by the user)" : ""));
+            if (!mode.console().isEmpty()) {
+                out.println();
+                out.print(mode.console().endsWith("\n") ? mode.console() : mode.console() + "\n");
+            }
+            out.println();
+            out.print(Verdicts.console(run.verdict()));
+        }
+        if (target.outDir().isPresent()) {
+            OutputDirectory dir = new OutputDirectory(target.outDir().get());
+            List<String> written = new ArrayList<>();
+            String currency = scenario.cost().currency();
+            dir.write("bom.csv", w -> CsvOutputs.writeBom(e, currency, w));
+            written.add("bom.csv");
+            dir.write("impedance.csv", w -> CsvOutputs.writeImpedance(e.curve(), run.judge().targetImpedanceOhms(), w));
+            written.add("impedance.csv");
+            Waveform droop = run.judge().droopWaveform(e);
+            Waveform overshoot = run.judge().overshootWaveform(e);
+            dir.write("worst-case.csv", w -> CsvOutputs.writeWorstCase(droop, w));
+            written.add("worst-case.csv");
+            ReportModel model = mode.model().apply(ReportBuilder.build(new ReportBuilder.Run(run.mode(), scenario,
+                    run.footprintName(), e, run.verdict(), droop, overshoot, run.search(), mode.sections())));
+            dir.write("impedance.svg", w -> w.write(Charts.impedanceChart(model.impedance())));
+            written.add("impedance.svg");
+            dir.write("worst-case.svg", w -> w.write(Charts.worstCaseChart(model.worstCase())));
+            written.add("worst-case.svg");
+            dir.write("report.html", w -> HtmlReport.write(model, w));
+            written.add("report.html");
+            dir.write("summary.json", w -> SummaryJson.write(summary, w));
+            written.add("summary.json");
+            if (!target.quiet() && !target.json()) {
+                out.println("Wrote " + String.join(", ", written) + " to " + target.outDirName());
+            }
+        }
+        out.flush();
+    }
+}

@@ -1,0 +1,34 @@
+package breakwater.report;
+
+import java.time.Duration;
+import java.util.Locale;
+
+/** Small text helpers shared by the reporters. */
+final class Texts {
+    private Texts() {
+    }
+
+    /** Money with four decimals, as in the BOM: "2.0880". */
+    static String money(double v) {
+        return String.format(Locale.ROOT, "%.4f", v);
+    }
+
+    /** " USD", or "" when the catalog names no currency. */
+    static String currency(String currency) {
+        return currency.isEmpty() ? "" : " " + currency;
+    }
+
+    /** A time limit in words: "30 s", "6.666 s", "2.500 min". */
+    static String duration(Duration d) {
+        double s = d.toNanos() / 1e9;
+        if (s >= 120) {
+            return String.format(Locale.ROOT, "%.4g min", s / 60);
+        }
+        return String.format(Locale.ROOT, "%.4g s", s);
+    }
+
+    /** "" for one, "s" for any other count. */
+    static String plural(long n) {
+        return n == 1 ? "" : "s";
+    }
+}
