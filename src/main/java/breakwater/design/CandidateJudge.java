@@ -102,9 +102,18 @@ public final class CandidateJudge {
         return unjudged;
     }
 
+    /**
+     * How this judge's models started so far.
+     *
+     * @param models     models built
+     * @param warmStarts how many of them started from a neighbour's poles ({@link PoleResidueModel#near})
+     */
+    public record ModelStarts(long models, long warmStarts) {
+    }
+
     /** Models built so far, and how many of them started from a neighbour's poles. */
-    public long[] modelStarts() {
-        return new long[] {models, warmStarts};
+    public ModelStarts modelStarts() {
+        return new ModelStarts(models, warmStarts);
     }
 
     /** Judges the bank with {@code counts[i]} parts of candidate i. */

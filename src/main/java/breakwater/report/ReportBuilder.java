@@ -217,8 +217,7 @@ public final class ReportBuilder {
         }
         double[] ii = java.util.Arrays.copyOfRange(i, a, b);
         double[] vv = java.util.Arrays.copyOfRange(v, a, b);
-        double[][] thin = thin(tt, ii, vv, PLOT_POINTS);
-        return new ReportModel.WaveformSeries(label, thin[0], thin[1], thin[2]);
+        return thin(tt, ii, vv, PLOT_POINTS).labelled(label);
     }
 
     static ReportModel.ImpedanceSeries impedanceSeries(String label, Evaluation e) {
@@ -231,18 +230,17 @@ public final class ReportBuilder {
     }
 
     static ReportModel.WaveformSeries waveformSeries(String label, Waveform w) {
-        double[][] thin = thin(w.timeS(), w.loadCurrentA(), w.voltageV(), PLOT_POINTS);
-        return new ReportModel.WaveformSeries(label, thin[0], thin[1], thin[2]);
+        return thin(w.timeS(), w.loadCurrentA(), w.voltageV(), PLOT_POINTS).labelled(label);
     }
 
     /**
      * Thins a waveform for plotting: splits it into buckets of equal sample count and keeps, from each, the
      * first sample and the samples with the lowest and highest voltage, so peaks survive.
      */
-    static double[][] thin(double[] t, double[] i, double[] v, int target) {
+    static Samples thin(double[] t, double[] i, double[] v, int target) {
         int n = t.length;
         if (n <= target) {
-            return new double[][] {t, i, v};
+            return new Samples(t, i, v);
         }
         int buckets = target / 3;
         List<Integer> keep = new ArrayList<>();
@@ -269,13 +267,22 @@ public final class ReportBuilder {
         if (keep.get(keep.size() - 1) != n - 1) {
             keep.add(n - 1);
         }
-        double[][] out = new double[3][keep.size()];
+        double[] tt = new double[keep.size()];
+        double[] ii = new double[keep.size()];
+        double[] vv = new double[keep.size()];
         for (int k = 0; k < keep.size(); k++) {
             int idx = keep.get(k);
-            out[0][k] = t[idx];
-            out[1][k] = i[idx];
-            out[2][k] = v[idx];
+            tt[k] = t[idx];
+            ii[k] = i[idx];
+            vv[k] = v[idx];
         }
-        return out;
+        return new Samples(tt, ii, vv);
+    }
+
+    /** Waveform samples on a common time base: time, load current, load voltage. */
+    record Samples(double[] timeS, double[] currentA, double[] voltageV) {
+        ReportModel.WaveformSeries labelled(String label) {
+            return new ReportModel.WaveformSeries(label, timeS, currentA, voltageV);
+        }
     }
 }

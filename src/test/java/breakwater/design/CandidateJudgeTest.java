@@ -51,10 +51,10 @@ class CandidateJudgeTest {
             assertThat(a.droopV()).isCloseTo(b.droopV(), within(1e-12));
             assertThat(a.overshootV()).isCloseTo(b.overshootV(), within(1e-12));
         }
-        assertThat(cold.modelStarts()[1]).isZero();
-        assertThat(warm.modelStarts()[0]).isEqualTo(200);
+        assertThat(cold.modelStarts().warmStarts()).isZero();
+        assertThat(warm.modelStarts().models()).isEqualTo(200);
         // most steps keep the same part types, and those start warm
-        assertThat(warm.modelStarts()[1]).isGreaterThan(100);
+        assertThat(warm.modelStarts().warmStarts()).isGreaterThan(100);
     }
 
     @Test
