@@ -1,5 +1,7 @@
 package breakwater.scenario;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.OptionalInt;
 
@@ -8,13 +10,14 @@ import java.util.OptionalInt;
  *
  * @param maxParts    most parts in total, or -1 for no limit
  * @param maxDistinct most distinct part types, or -1 for no limit
- * @param maxPerCase  most parts per EIA case code (keys are strings such as "0402")
+ * @param maxPerCase  most parts per EIA case code (keys are strings such as "0402"), in the order given (file
+ *                    order), so that the limits and what breaks them are listed the same way on every run
  */
 public record Board(int maxParts, int maxDistinct, Map<String, Integer> maxPerCase) {
     public static final Board UNLIMITED = new Board(-1, -1, Map.of());
 
     public Board {
-        maxPerCase = Map.copyOf(maxPerCase);
+        maxPerCase = Collections.unmodifiableMap(new LinkedHashMap<>(maxPerCase));
         if (maxParts < -1 || maxDistinct < -1) {
             throw new IllegalArgumentException("board limits must be >= 0");
         }

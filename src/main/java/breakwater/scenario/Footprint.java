@@ -1,5 +1,7 @@
 package breakwater.scenario;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Objects;
 
@@ -10,7 +12,8 @@ import java.util.Objects;
 public record Footprint(String name, Map<String, Double> mountInductanceByCaseH) {
     public Footprint {
         Objects.requireNonNull(name, "name");
-        mountInductanceByCaseH = Map.copyOf(mountInductanceByCaseH);
+        // in the order given (file order), like every map of the scenario
+        mountInductanceByCaseH = Collections.unmodifiableMap(new LinkedHashMap<>(mountInductanceByCaseH));
         for (var e : mountInductanceByCaseH.entrySet()) {
             if (!(e.getValue() >= 0)) {
                 throw new IllegalArgumentException("footprint " + name + ": mounting inductance for "

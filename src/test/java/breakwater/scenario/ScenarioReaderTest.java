@@ -197,6 +197,28 @@ class ScenarioReaderTest {
         assertThat(s.board().maxPerCase()).containsEntry("0201", 0).containsEntry("1206", 4);
     }
 
+    /**
+     * The per-case limits keep file order (not sorted, not hashed): the broken limits are listed in that
+     * order, the same on every run. Twelve cases, none in sorted order, so a hashed map would differ.
+     */
+    @Test
+    void perCaseLimitsKeepFileOrder() throws Exception {
+        List<String> order = List.of("1206", "0201", "0805", "D", "2220", "0402", "1210", "0603", "1812",
+                "0306", "2512", "1008");
+        StringBuilder toml = new StringBuilder(BASE + "[board.max_per_case]\n");
+        for (int i = 0; i < order.size(); i++) {
+            toml.append('"').append(order.get(i)).append("\" = ").append(i).append('\n');
+        }
+        Scenario s = parse(toml.toString());
+        assertThat(s.board().maxPerCase().keySet()).containsExactlyElementsOf(order);
+        assertThat(s.board().maxPerCase().values()).containsExactly(0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11);
+        // and the footprint's cases too
+        Scenario f = parse(BASE + "[footprint.a]\n0603 = \"0.6n\"\n\"0201\" = \"0.3n\"\n0402 = \"0.4n\"\n"
+                + "1206 = \"0.9n\"\n0805 = \"0.7n\"\n");
+        assertThat(f.footprints().get("a").mountInductanceByCaseH().keySet())
+                .containsExactly("0603", "0201", "0402", "1206", "0805");
+    }
+
     @Test
     void objectiveAndExistingBank() throws Exception {
         Files.writeString(dir.resolve("old-bank.csv"), "part,count\n");
