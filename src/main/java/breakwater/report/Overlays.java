@@ -39,12 +39,6 @@ public final class Overlays {
                 m.resonances(), m.sections(), m.settings(), m.cautions());
     }
 
-    /** The model with another verdict (a mode's own condition on top of the spec). */
-    public static ReportModel withVerdict(ReportModel m, ReportModel.Verdict verdict) {
-        return new ReportModel(m.title(), m.subtitleLines(), verdict, m.keyFigures(), m.impedance(), m.worstCase(),
-                m.bom(), m.resonances(), m.sections(), m.settings(), m.cautions());
-    }
-
     /** The model with a key figure added at the end. */
     public static ReportModel withKeyFigure(ReportModel m, ReportModel.KeyFigure figure) {
         List<ReportModel.KeyFigure> keys = new java.util.ArrayList<>(m.keyFigures());
