@@ -22,7 +22,7 @@ import java.util.Random;
  * parallel with series-RLC capacitor branches) evaluated in closed form, and a synthetic resonant load
  * pattern integrated with a plain fixed-step scheme. Nothing here is a real design.
  */
-final class ExampleReport {
+public final class ExampleReport {
     static final double V_NOM = 0.95;
     static final double TOL = 0.03;
     static final double DELTA_I = 3.0;
@@ -46,7 +46,7 @@ final class ExampleReport {
         return 1 / Math.hypot(yr, yi);
     }
 
-    static ImpedanceSeries curve(String label, double[][] branches) {
+    public static ImpedanceSeries curve(String label, double[][] branches) {
         int n = 400;
         double[] f = new double[n];
         double[] z = new double[n];
@@ -57,7 +57,7 @@ final class ExampleReport {
         return new ImpedanceSeries(label, f, z);
     }
 
-    static final double[][] NEW_BANK = {
+    public static final double[][] NEW_BANK = {
             {2e-3, 1.2e-9, 470e-6 / 2}, // bulk, two in parallel folded into one branch
             {2.5e-3 / 6, 0.45e-9 / 6, 6 * 10e-6},
             {6e-3 / 12, 0.35e-9 / 12, 12 * 1e-6},
