@@ -1,29 +1,22 @@
 package breakwater.report;
 
-import breakwater.report.ReportModel.ImpedanceMarker;
 import breakwater.report.ReportModel.ImpedancePlot;
-import breakwater.report.ReportModel.ImpedanceSeries;
 import breakwater.report.ReportModel.WaveformPlot;
-import breakwater.report.ReportModel.WaveformSeries;
+import breakwater.report.chart.ImpedanceChart;
+import breakwater.report.chart.SvgWriter;
+import breakwater.report.chart.WorstCaseChart;
 
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.LegendItem;
 import org.jfree.chart.LegendItemCollection;
 import org.jfree.chart.annotations.XYTextAnnotation;
-import org.jfree.chart.axis.AxisState;
 import org.jfree.chart.axis.LogAxis;
-import org.jfree.chart.axis.LogTick;
 import org.jfree.chart.axis.NumberAxis;
-import org.jfree.chart.axis.NumberTick;
 import org.jfree.chart.axis.NumberTickUnit;
-import org.jfree.chart.axis.Tick;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
-import org.jfree.chart.plot.CombinedDomainXYPlot;
 import org.jfree.chart.plot.DatasetRenderingOrder;
-import org.jfree.chart.plot.IntervalMarker;
 import org.jfree.chart.plot.Plot;
-import org.jfree.chart.plot.PlotOrientation;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.StandardXYBarPainter;
@@ -46,18 +39,12 @@ import org.jfree.svg.ViewBox;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
-import java.awt.Graphics2D;
 import java.awt.GraphicsEnvironment;
 import java.awt.Paint;
-import java.awt.Shape;
 import java.awt.Stroke;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
-import java.awt.geom.Path2D;
 import java.awt.geom.Rectangle2D;
-import java.math.BigDecimal;
-import java.math.MathContext;
-import java.text.CharacterIterator;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
@@ -86,10 +73,8 @@ public final class Charts {
             new Color(0x0072B2), new Color(0xD55E00), new Color(0x009E73), new Color(0xCC79A7),
             new Color(0xE69F00), new Color(0x56B4E9), new Color(0x000000)};
     private static final Color LIMIT = new Color(0xB2182B);
-    private static final Color NOMINAL = new Color(0x555555);
     private static final Color GRID = new Color(0xDDDDDD);
     private static final Color MINOR_GRID = new Color(0xEEEEEE);
-    private static final Color BAND = new Color(0x0072B2);
     private static final Color MARK = new Color(0x333333);
     private static final Color LABEL_BACKGROUND = new Color(255, 255, 255, 215);
     /**
@@ -110,7 +95,6 @@ public final class Charts {
     private static final Stroke LINE = new BasicStroke(1.8f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
     private static final Stroke DASHED = new BasicStroke(1.4f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
             new float[]{7f, 4f}, 0f);
-    private static final Stroke THIN = new BasicStroke(0.9f);
 
     private Charts() {
     }
@@ -235,207 +219,19 @@ public final class Charts {
     }
 
     // ------------------------------------------------------------------------------------------------
-    // Impedance
+    // Impedance and worst case, drawn by their own classes
 
     /** |Z| against frequency on log–log axes, with the band shaded and the target as a dashed line. */
     public static String impedanceChart(ImpedancePlot plot) {
-        return impedanceChart(plot, WIDTH, HEIGHT);
+        return ImpedanceChart.svg(plot);
     }
-
-    public static String impedanceChart(ImpedancePlot plot, int width, int height) {
-        XYSeriesCollection data = new XYSeriesCollection();
-        double fMin = Double.POSITIVE_INFINITY;
-        double fMax = 0;
-        double zMin = plot.targetOhm();
-        double zMax = plot.targetOhm();
-        int index = 0;
-        for (ImpedanceSeries s : plot.series()) {
-            XYSeries xy = new XYSeries(index++ + " " + s.label(), false, true);
-            double[] f = s.frequencyHz();
-            double[] z = s.impedanceOhm();
-            for (int i = 0; i < f.length; i++) {
-                xy.add(f[i], z[i], false);
-                zMin = Math.min(zMin, z[i]);
-                zMax = Math.max(zMax, z[i]);
-            }
-            fMin = Math.min(fMin, f[0]);
-            fMax = Math.max(fMax, f[f.length - 1]);
-            data.addSeries(xy);
-        }
-        // the frequency axis ends where the curve does (no empty decade after it); |Z| spans whole decades
-        LogAxis fAxis = logAxis("frequency", "Hz", fMin, fMax, false);
-        LogAxis zAxis = logAxis("|Z| at the load", "Ω", zMin, zMax, true);
-        XYLineAndShapeRenderer lines = lineRenderer(plot.series().size());
-        XYPlot xy = new XYPlot(data, fAxis, zAxis, lines);
-        style(xy);
-
-        IntervalMarker band = new IntervalMarker(plot.bandFromHz(), plot.bandToHz(), withAlpha(BAND, 28), THIN,
-                withAlpha(BAND, 28), THIN, 1f);
-        band.setLabel("band " + EngineeringFormat.perValue("Hz").text(plot.bandFromHz()) + " – "
-                + EngineeringFormat.perValue("Hz").text(plot.bandToHz()));
-        band.setLabelFont(NOTE_FONT);
-        band.setLabelPaint(BAND.darker());
-        band.setLabelAnchor(RectangleAnchor.TOP_LEFT);
-        band.setLabelTextAnchor(TextAnchor.TOP_LEFT);
-        band.setLabelOffset(new RectangleInsets(4, 6, 4, 6));
-        band.setLabelBackgroundColor(LABEL_BACKGROUND);
-        xy.addDomainMarker(band, Layer.BACKGROUND);
-
-        String targetText = "target " + EngineeringFormat.perValue("Ω").text(plot.targetOhm());
-        ValueMarker target = new ValueMarker(plot.targetOhm(), LIMIT, DASHED);
-        target.setLabel(targetText);
-        target.setLabelFont(NOTE_FONT);
-        target.setLabelPaint(LIMIT);
-        target.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
-        target.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
-        target.setLabelOffset(new RectangleInsets(3, 6, 3, 6));
-        target.setLabelBackgroundColor(LABEL_BACKGROUND);
-        xy.addRangeMarker(target, Layer.FOREGROUND);
-
-        LegendItemCollection legend = new LegendItemCollection();
-        for (int i = 0; i < plot.series().size(); i++) {
-            legend.add(lineItem(plot.series().get(i).label(), PALETTE[i % PALETTE.length], LINE));
-        }
-        legend.add(lineItem(targetText, LIMIT, DASHED));
-        legend.add(new LegendItem("band", null, null, null, new Rectangle2D.Double(-6, -5, 12, 10),
-                withAlpha(BAND, 60)));
-
-        if (!plot.markers().isEmpty()) {
-            XYSeries marks = new XYSeries("markers", false, true);
-            for (ImpedanceMarker m : plot.markers()) {
-                marks.add(m.frequencyHz(), m.impedanceOhm());
-            }
-            XYLineAndShapeRenderer shapes = new XYLineAndShapeRenderer(false, true);
-            Shape triangle = downTriangle(5);
-            shapes.setSeriesShape(0, triangle);
-            shapes.setSeriesPaint(0, MARK);
-            shapes.setSeriesVisibleInLegend(0, false);
-            xy.setDataset(1, new XYSeriesCollection(marks));
-            xy.setRenderer(1, shapes);
-            legend.add(new LegendItem("anti-resonance", null, null, null, triangle, MARK));
-            for (ImpedanceMarker m : plot.markers()) {
-                if (!m.label().isEmpty()) {
-                    // a tenth of a decade above the marker, in data units on the log axis
-                    XYTextAnnotation a = new XYTextAnnotation(m.label(), m.frequencyHz(), m.impedanceOhm() * 1.3);
-                    a.setFont(NOTE_FONT);
-                    a.setPaint(MARK);
-                    a.setTextAnchor(TextAnchor.BOTTOM_CENTER);
-                    lines.addAnnotation(a);
-                }
-            }
-        }
-        xy.setFixedLegendItems(legend);
-        return toSvg(chart(xy, true), width, height, "bwz", plot.hashCode());
-    }
-
-    // ------------------------------------------------------------------------------------------------
-    // Worst case
 
     /**
      * Load current (above) and load voltage (below) sharing one time axis, with the voltage limits
      * dashed, the nominal thin, and the instant of the largest deviation from nominal marked.
      */
     public static String worstCaseChart(WaveformPlot plot) {
-        return worstCaseChart(plot, WIDTH, HEIGHT + 60);
-    }
-
-    public static String worstCaseChart(WaveformPlot plot, int width, int height) {
-        double tMin = Double.POSITIVE_INFINITY;
-        double tMax = Double.NEGATIVE_INFINITY;
-        double iMin = Double.POSITIVE_INFINITY;
-        double iMax = Double.NEGATIVE_INFINITY;
-        double vMin = plot.lowerLimitV();
-        double vMax = plot.upperLimitV();
-        XYSeriesCollection currents = new XYSeriesCollection();
-        XYSeriesCollection voltages = new XYSeriesCollection();
-        int index = 0;
-        for (WaveformSeries s : plot.series()) {
-            XYSeries ci = new XYSeries(index + " " + s.label(), false, true);
-            XYSeries cv = new XYSeries(index + " " + s.label(), false, true);
-            index++;
-            double[] t = s.timeS();
-            double[] i = s.currentA();
-            double[] v = s.voltageV();
-            for (int k = 0; k < t.length; k++) {
-                ci.add(t[k], i[k], false);
-                cv.add(t[k], v[k], false);
-                iMin = Math.min(iMin, i[k]);
-                iMax = Math.max(iMax, i[k]);
-                vMin = Math.min(vMin, v[k]);
-                vMax = Math.max(vMax, v[k]);
-            }
-            tMin = Math.min(tMin, t[0]);
-            tMax = Math.max(tMax, t[t.length - 1]);
-            currents.addSeries(ci);
-            voltages.addSeries(cv);
-        }
-        NumberAxis timeAxis = linearAxis("time", "s", tMin, tMax);
-        double iPad = Math.max((iMax - iMin) * 0.12, Math.max(Math.abs(iMax), 1e-12) * 0.05);
-        NumberAxis currentAxis = linearAxis("load current", "A", iMin - iPad, iMax + iPad);
-        double vPad = (vMax - vMin) * 0.10;
-        NumberAxis voltageAxis = linearAxis("load voltage", "V", vMin - vPad, vMax + vPad);
-
-        XYLineAndShapeRenderer iLines = lineRenderer(plot.series().size());
-        XYPlot top = new XYPlot(currents, null, currentAxis, iLines);
-        style(top);
-        XYLineAndShapeRenderer vLines = lineRenderer(plot.series().size());
-        XYPlot bottom = new XYPlot(voltages, null, voltageAxis, vLines);
-        style(bottom);
-
-        bottom.addRangeMarker(valueLine(plot.upperLimitV(), "upper limit " + fourDigits(plot.upperLimitV(), "V"),
-                LIMIT, DASHED, false), Layer.FOREGROUND);
-        bottom.addRangeMarker(valueLine(plot.lowerLimitV(), "lower limit " + fourDigits(plot.lowerLimitV(), "V"),
-                LIMIT, DASHED, true), Layer.FOREGROUND);
-        bottom.addRangeMarker(new ValueMarker(plot.nominalV(), NOMINAL, THIN), Layer.BACKGROUND);
-
-        // the instant of the largest deviation from nominal, on the first waveform
-        WaveformSeries first = plot.series().get(0);
-        double[] t = first.timeS();
-        double[] v = first.voltageV();
-        int worst = 0;
-        for (int k = 1; k < v.length; k++) {
-            if (Math.abs(v[k] - plot.nominalV()) > Math.abs(v[worst] - plot.nominalV())) {
-                worst = k;
-            }
-        }
-        EngineeringFormat tText = EngineeringFormat.perValue("s");
-        boolean low = v[worst] < plot.nominalV();
-        String what = (low ? "minimum " : "maximum ") + fourDigits(v[worst], "V") + " at " + tText.text(t[worst]);
-        boolean nearRightEdge = (t[worst] - tMin) > 0.6 * (tMax - tMin);
-        for (XYPlot p : List.of(top, bottom)) {
-            ValueMarker m = new ValueMarker(t[worst], MARK, new BasicStroke(0.8f, BasicStroke.CAP_BUTT,
-                    BasicStroke.JOIN_MITER, 10f, new float[]{2f, 3f}, 0f));
-            p.addDomainMarker(m, Layer.FOREGROUND);
-        }
-        XYTextAnnotation note = new XYTextAnnotation(what + "  ", t[worst], v[worst]);
-        note.setFont(NOTE_FONT);
-        note.setPaint(MARK);
-        note.setTextAnchor(nearRightEdge ? (low ? TextAnchor.TOP_RIGHT : TextAnchor.BOTTOM_RIGHT)
-                : (low ? TextAnchor.TOP_LEFT : TextAnchor.BOTTOM_LEFT));
-        vLines.addAnnotation(note);
-        XYLineAndShapeRenderer dot = new XYLineAndShapeRenderer(false, true);
-        XYSeries worstPoint = new XYSeries("worst", false, true);
-        worstPoint.add(t[worst], v[worst]);
-        dot.setSeriesShape(0, new Ellipse2D.Double(-4, -4, 8, 8));
-        dot.setSeriesPaint(0, MARK);
-        bottom.setDataset(1, new XYSeriesCollection(worstPoint));
-        bottom.setRenderer(1, dot);
-
-        CombinedDomainXYPlot combined = new CombinedDomainXYPlot(timeAxis);
-        combined.setGap(12);
-        combined.add(top, 2);
-        combined.add(bottom, 3);
-        combined.setOrientation(PlotOrientation.VERTICAL);
-        LegendItemCollection legend = new LegendItemCollection();
-        for (int k = 0; k < plot.series().size(); k++) {
-            legend.add(lineItem(plot.series().get(k).label(), PALETTE[k % PALETTE.length], LINE));
-        }
-        legend.add(lineItem("limits " + fourDigits(plot.lowerLimitV(), "V") + " / "
-                + fourDigits(plot.upperLimitV(), "V"), LIMIT, DASHED));
-        legend.add(lineItem("nominal " + fourDigits(plot.nominalV(), "V"), NOMINAL, THIN));
-        legend.add(new LegendItem(what, null, null, null, new Ellipse2D.Double(-4, -4, 8, 8), MARK));
-        combined.setFixedLegendItems(legend);
-        return toSvg(chart(combined, true), width, height, "bww", plot.hashCode());
+        return WorstCaseChart.svg(plot);
     }
 
     // ------------------------------------------------------------------------------------------------
@@ -647,66 +443,6 @@ public final class Charts {
         a.setTickMarkPaint(new Color(0x999999));
     }
 
-    /**
-     * Log axis from the decade at or below {@code min} to the decade at or above {@code max}
-     * ({@code wholeDecades}) or to {@code max} itself, with one labelled tick per decade and nine minor
-     * ticks between.
-     */
-    private static LogAxis logAxis(String label, String unit, double min, double max, boolean wholeDecades) {
-        LogAxis a = new TextLogAxis(label);
-        styleAxis(a);
-        double lo = Math.pow(10, Math.floor(Math.log10(min) + 1e-9));
-        double hi = wholeDecades ? Math.pow(10, Math.ceil(Math.log10(max) - 1e-9)) : max;
-        if (hi <= lo) {
-            hi = lo * 10;
-        }
-        a.setSmallestValue(lo / 10);
-        a.setAutoRange(false);
-        // a hair wider than the decades, so the ticks at both ends survive the range check
-        a.setRange(lo / 1.0001, hi * 1.0001);
-        a.setAutoTickUnitSelection(false);
-        // one decade per major tick; ten minor intervals, spaced linearly in value (2, 3, … 9 × 10^n)
-        a.setTickUnit(new NumberTickUnit(1.0, EngineeringFormat.perValue(unit), 10), false, true);
-        a.setMinorTickMarksVisible(true);
-        a.setNumberFormatOverride(EngineeringFormat.perValue(unit));
-        return a;
-    }
-
-    /**
-     * A log axis whose tick labels are plain strings. The stock axis labels ticks with attributed strings
-     * (for superscript exponents), which SVG output receives as glyph outlines instead of text.
-     */
-    private static final class TextLogAxis extends LogAxis {
-        TextLogAxis(String label) {
-            super(label);
-        }
-
-        @Override
-        @SuppressWarnings({"rawtypes", "unchecked"})
-        public List refreshTicks(Graphics2D g2, AxisState state, Rectangle2D dataArea,
-                                 RectangleEdge edge) {
-            List<Tick> out = new ArrayList<>();
-            for (Object o : super.refreshTicks(g2, state, dataArea, edge)) {
-                if (o instanceof LogTick t) {
-                    String text = "";
-                    if (t.getAttributedLabel() != null) {
-                        StringBuilder b = new StringBuilder();
-                        var it = t.getAttributedLabel().getIterator();
-                        for (char c = it.first(); c != CharacterIterator.DONE; c = it.next()) {
-                            b.append(c);
-                        }
-                        text = b.toString();
-                    }
-                    out.add(new NumberTick(t.getTickType(), t.getValue(), text, t.getTextAnchor(),
-                            t.getRotationAnchor(), t.getAngle()));
-                } else {
-                    out.add((Tick) o);
-                }
-            }
-            return out;
-        }
-    }
-
     private static NumberAxis linearAxis(String label, String unit, double lo, double hi) {
         if (!(hi > lo)) {
             double pad = lo == 0 ? 1 : Math.abs(lo) * 0.01;
@@ -719,16 +455,6 @@ public final class Charts {
         a.setRange(lo, hi);
         a.setNumberFormatOverride(EngineeringFormat.forRange(unit, lo, hi));
         return a;
-    }
-
-    private static XYLineAndShapeRenderer lineRenderer(int n) {
-        XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
-        for (int i = 0; i < n; i++) {
-            r.setSeriesPaint(i, PALETTE[i % PALETTE.length]);
-            r.setSeriesStroke(i, LINE);
-        }
-        r.setDrawSeriesLineAsPath(true);
-        return r;
     }
 
     private static ValueMarker valueLine(double value, String label, Paint paint, Stroke stroke, boolean below) {
@@ -746,15 +472,6 @@ public final class Charts {
     private static LegendItem lineItem(String label, Paint paint, Stroke stroke) {
         LegendItem item = new LegendItem(label, null, null, null, new Line2D.Double(-12, 0, 12, 0), stroke, paint);
         return item;
-    }
-
-    private static Shape downTriangle(double s) {
-        Path2D.Double p = new Path2D.Double();
-        p.moveTo(-s, -s);
-        p.lineTo(s, -s);
-        p.lineTo(0, s);
-        p.closePath();
-        return p;
     }
 
     private static Color withAlpha(Color c, int alpha) {
@@ -783,12 +500,6 @@ public final class Charts {
         return 10 * p;
     }
 
-    /** Voltages with four significant digits and no prefix change across 1 V: "0.9215 V". */
-    private static String fourDigits(double v, String unit) {
-        return new BigDecimal(v).round(new MathContext(4)).stripTrailingZeros().toPlainString()
-                + " " + unit;
-    }
-
     static String toSvg(JFreeChart chart, int width, int height, String kind, int hash) {
         ReportModel.require(width >= 100 && height >= 80, "chart size " + width + " × " + height
                 + " is too small; use at least 100 × 80");
@@ -802,13 +513,6 @@ public final class Charts {
 
     /** Removes an XML declaration and a DOCTYPE, if present, so the SVG can be inlined in a page. */
     public static String stripProlog(String svg) {
-        String s = svg.strip();
-        if (s.startsWith("<?xml")) {
-            s = s.substring(s.indexOf("?>") + 2).strip();
-        }
-        if (s.regionMatches(true, 0, "<!DOCTYPE", 0, 9)) {
-            s = s.substring(s.indexOf('>') + 1).strip();
-        }
-        return s;
+        return SvgWriter.stripProlog(svg);
     }
 }
