@@ -3,7 +3,6 @@ package breakwater.cli;
 import breakwater.design.BankEvaluator;
 import breakwater.design.Evaluation;
 import breakwater.optimize.SearchResult;
-import breakwater.report.Charts;
 import breakwater.report.ConsoleReport;
 import breakwater.report.HtmlReport;
 import breakwater.report.ReportBuilder;
@@ -12,6 +11,8 @@ import breakwater.report.CsvOutputs;
 import breakwater.report.OutputDirectory;
 import breakwater.report.SummaryJson;
 import breakwater.report.Verdicts;
+import breakwater.report.chart.ImpedanceChart;
+import breakwater.report.chart.WorstCaseChart;
 import breakwater.timedomain.Waveform;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
@@ -105,9 +106,9 @@ final class Results {
                         "Meets the spec in the model, but with little to spare", List.of(note), true))).orElse(model);
             }
             ReportModel finalModel = model;
-            dir.write("impedance.svg", w -> w.write(Charts.impedanceChart(finalModel.impedance())));
+            dir.write("impedance.svg", w -> w.write(ImpedanceChart.svg(finalModel.impedance())));
             written.add("impedance.svg");
-            dir.write("worst-case.svg", w -> w.write(Charts.worstCaseChart(finalModel.worstCase())));
+            dir.write("worst-case.svg", w -> w.write(WorstCaseChart.svg(finalModel.worstCase())));
             written.add("worst-case.svg");
             dir.write("report.html", w -> HtmlReport.write(finalModel, w));
             written.add("report.html");
