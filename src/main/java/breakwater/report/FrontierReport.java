@@ -2,6 +2,10 @@ package breakwater.report;
 
 import breakwater.optimize.ExcursionFrontier;
 import breakwater.optimize.FrontierResult;
+import breakwater.report.chart.Frontier;
+import breakwater.report.chart.FrontierChart;
+import breakwater.report.chart.LabelledPoint;
+import breakwater.report.chart.Limit;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
@@ -102,11 +106,11 @@ public final class FrontierReport {
         }
         cost[pts.size()] = f.closest().cost().total();
         exc[pts.size()] = f.tightestV();
-        List<Charts.LabelledPoint> highlighted = List.of(
-                new Charts.LabelledPoint("spec's limit", specPoint.costTotal(), specPoint.excursionV()),
-                new Charts.LabelledPoint("tightest", pts.get(0).costTotal(), pts.get(0).excursionV()));
-        String chart = Charts.frontierChart(new Charts.Frontier("cost per board", r.judge().scenario().cost().currency(),
-                "worst excursion", "V", cost, exc, List.of(new Charts.Limit("allowed by the spec "
+        List<LabelledPoint> highlighted = List.of(
+                new LabelledPoint("spec's limit", specPoint.costTotal(), specPoint.excursionV()),
+                new LabelledPoint("tightest", pts.get(0).costTotal(), pts.get(0).excursionV()));
+        String chart = FrontierChart.svg(new Frontier("cost per board", r.judge().scenario().cost().currency(),
+                "worst excursion", "V", cost, exc, List.of(new Limit("allowed by the spec "
                 + format(f.allowedV(), VOLTAGE), f.allowedV())), highlighted));
         String intro = String.format(Locale.ROOT, "The cheapest bank for each excursion limit (worst droop and worst "
                         + "overshoot each at most the limit), from the smallest worst excursion the search reached, %s, "

@@ -4,6 +4,9 @@ import breakwater.report.ReportModel.BomRow;
 import breakwater.report.ReportModel.KeyFigure;
 import breakwater.report.ReportModel.Section;
 import breakwater.report.ReportModel.Table;
+import breakwater.report.chart.ImpedanceChart;
+import breakwater.report.chart.SvgWriter;
+import breakwater.report.chart.WorstCaseChart;
 
 import java.io.IOException;
 import java.io.Writer;
@@ -107,7 +110,7 @@ public final class HtmlReport {
         var z = m.impedance();
         EngineeringFormat hz = EngineeringFormat.perValue("Hz");
         b.append("<section id=\"impedance\">\n<h2>Impedance at the load</h2>\n<figure>\n")
-                .append(Charts.impedanceChart(z)).append('\n')
+                .append(ImpedanceChart.svg(z)).append('\n')
                 .append("<figcaption>|Z| against frequency. Shaded: the band ").append(esc(hz.text(z.bandFromHz())))
                 .append(" – ").append(esc(hz.text(z.bandToHz()))).append(" where flatness and the target are judged;")
                 .append(" dashed: the target impedance ").append(esc(EngineeringFormat.perValue("Ω").text(z.targetOhm())))
@@ -115,7 +118,7 @@ public final class HtmlReport {
 
         var w = m.worstCase();
         b.append("<section id=\"worst-case\">\n<h2>Worst-case load pattern</h2>\n<figure>\n")
-                .append(Charts.worstCaseChart(w)).append('\n')
+                .append(WorstCaseChart.svg(w)).append('\n')
                 .append("<figcaption>Above: the load current that drives the rail furthest from nominal. Below: the ")
                 .append("load voltage it causes, with the tolerance limits dashed and the nominal voltage thin; the ")
                 .append("dot marks the largest deviation.</figcaption>\n</figure>\n</section>\n");
@@ -140,7 +143,7 @@ public final class HtmlReport {
                 table(b, t);
             }
             for (String svg : s.chartsSvg()) {
-                b.append("<figure>\n").append(Charts.stripProlog(svg)).append("\n</figure>\n");
+                b.append("<figure>\n").append(SvgWriter.stripProlog(svg)).append("\n</figure>\n");
             }
             b.append("</section>\n");
         }

@@ -1,6 +1,9 @@
 package breakwater.report;
 
 import breakwater.design.MonteCarlo;
+import breakwater.report.chart.Histogram;
+import breakwater.report.chart.HistogramChart;
+import breakwater.report.chart.Limit;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.util.ArrayList;
@@ -77,10 +80,10 @@ public final class MonteCarloReport {
         }
         ReportModel.Table parts = new ReportModel.Table("How each part type was varied",
                 List.of("part", "count", "capacitance", "tolerance from", "ESR and ESL"), partRows);
-        String droopChart = Charts.histogramChart(new Charts.Histogram("worst droop", "V", r.droopV(), bins(s.samples()),
-                List.of(new Charts.Limit("allowed droop " + format(allowedDroop, VOLTAGE), allowedDroop))));
-        String overChart = Charts.histogramChart(new Charts.Histogram("worst overshoot", "V", r.overshootV(),
-                bins(s.samples()), List.of(new Charts.Limit("allowed overshoot " + format(allowedOver, VOLTAGE),
+        String droopChart = HistogramChart.svg(new Histogram("worst droop", "V", r.droopV(), bins(s.samples()),
+                List.of(new Limit("allowed droop " + format(allowedDroop, VOLTAGE), allowedDroop))));
+        String overChart = HistogramChart.svg(new Histogram("worst overshoot", "V", r.overshootV(),
+                bins(s.samples()), List.of(new Limit("allowed overshoot " + format(allowedOver, VOLTAGE),
                 allowedOver))));
         String text = String.format(Locale.ROOT, "%d banks were drawn (seed %d, %.1f s). In each, every part type's "
                         + "capacitance is drawn uniformly within its tolerance and its ESR and ESL within ±%s; all "

@@ -5,6 +5,7 @@ import breakwater.design.Evaluation;
 import breakwater.design.Verdict;
 import breakwater.network.AntiResonance;
 import breakwater.optimize.SearchResult;
+import breakwater.report.chart.WorstCaseChart;
 import breakwater.scenario.Rail;
 import breakwater.scenario.Scenario;
 import breakwater.timedomain.Waveform;
@@ -141,13 +142,13 @@ public final class ReportBuilder {
                     "The fast part of the same droop pattern, with time counted from the worst instant: how the "
                             + "load times its swings against the highest anti-resonances" + (r.hasEdgeTime() ? ", never faster than ΔI in " + format(r.edgeTimeS(), TIME) : "")
                             + ".")
-                    .withChart(Charts.worstCaseChart(new ReportModel.WaveformPlot(List.of(close), r.voltageV(),
+                    .withChart(WorstCaseChart.svg(new ReportModel.WaveformPlot(List.of(close), r.voltageV(),
                             r.lowerLimitV(), r.upperLimitV()))));
         }
         sections.add(ReportModel.Section.text("Worst-case overshoot pattern",
                 "The load pattern that drives the voltage highest above the operating point (peak "
                         + ConsoleReport.volts(wc.maxVoltageV()) + ", limit " + ConsoleReport.volts(wc.upperLimitV()) + ").")
-                .withChart(Charts.worstCaseChart(new ReportModel.WaveformPlot(
+                .withChart(WorstCaseChart.svg(new ReportModel.WaveformPlot(
                         List.of(waveformSeries("worst-case overshoot pattern", run.overshoot())),
                         r.voltageV(), r.lowerLimitV(), r.upperLimitV()))));
         sections.addAll(run.extraSections());

@@ -273,7 +273,8 @@ public record ReportModel(
 
     /**
      * An extra section: a heading, paragraphs, then any tables and charts (inline SVG, e.g. from
-     * {@link Charts}). Lists may be empty; that is how a section says "no table" or "no chart".
+     * {@link breakwater.report.chart.HistogramChart}). Lists may be empty; that is how a section says
+     * "no table" or "no chart".
      */
     public record Section(String heading, List<String> paragraphs, List<Table> tables, List<String> chartsSvg) {
         public Section {

@@ -4,6 +4,8 @@ import breakwater.design.BankEvaluator;
 import breakwater.design.Evaluation;
 import breakwater.design.Verdict;
 import breakwater.optimize.SearchResult;
+import breakwater.report.chart.ImpedanceChart;
+import breakwater.report.chart.WorstCaseChart;
 import breakwater.timedomain.Waveform;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
@@ -89,9 +91,9 @@ public final class ResultWriter {
             written.add("worst-case.csv");
             ReportModel model = mode.model().apply(ReportBuilder.build(new ReportBuilder.Run(run.mode(), scenario,
                     run.footprintName(), e, run.verdict(), droop, overshoot, run.search(), mode.sections())));
-            dir.write("impedance.svg", w -> w.write(Charts.impedanceChart(model.impedance())));
+            dir.write("impedance.svg", w -> w.write(ImpedanceChart.svg(model.impedance())));
             written.add("impedance.svg");
-            dir.write("worst-case.svg", w -> w.write(Charts.worstCaseChart(model.worstCase())));
+            dir.write("worst-case.svg", w -> w.write(WorstCaseChart.svg(model.worstCase())));
             written.add("worst-case.svg");
             dir.write("report.html", w -> HtmlReport.write(model, w));
             written.add("report.html");

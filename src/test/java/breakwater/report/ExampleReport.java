@@ -12,6 +12,12 @@ import breakwater.report.ReportModel.Tone;
 import breakwater.report.ReportModel.Verdict;
 import breakwater.report.ReportModel.WaveformPlot;
 import breakwater.report.ReportModel.WaveformSeries;
+import breakwater.report.chart.Frontier;
+import breakwater.report.chart.FrontierChart;
+import breakwater.report.chart.Histogram;
+import breakwater.report.chart.HistogramChart;
+import breakwater.report.chart.LabelledPoint;
+import breakwater.report.chart.Limit;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -22,7 +28,7 @@ import java.util.Random;
  * parallel with series-RLC capacitor branches) evaluated in closed form, and a synthetic resonant load
  * pattern integrated with a plain fixed-step scheme. Nothing here is a real design.
  */
-final class ExampleReport {
+public final class ExampleReport {
     static final double V_NOM = 0.95;
     static final double TOL = 0.03;
     static final double DELTA_I = 3.0;
@@ -46,7 +52,7 @@ final class ExampleReport {
         return 1 / Math.hypot(yr, yi);
     }
 
-    static ImpedanceSeries curve(String label, double[][] branches) {
+    public static ImpedanceSeries curve(String label, double[][] branches) {
         int n = 400;
         double[] f = new double[n];
         double[] z = new double[n];
@@ -57,7 +63,7 @@ final class ExampleReport {
         return new ImpedanceSeries(label, f, z);
     }
 
-    static final double[][] NEW_BANK = {
+    public static final double[][] NEW_BANK = {
             {2e-3, 1.2e-9, 470e-6 / 2}, // bulk, two in parallel folded into one branch
             {2.5e-3 / 6, 0.45e-9 / 6, 6 * 10e-6},
             {6e-3 / 12, 0.35e-9 / 12, 12 * 1e-6},
@@ -139,18 +145,18 @@ final class ExampleReport {
         for (int k = 0; k < mc.length; k++) {
             mc[k] = 0.0215 + 0.0018 * rnd.nextGaussian();
         }
-        String hist = Charts.histogramChart(new Charts.Histogram("worst droop", "V", mc, 40,
-                List.of(new Charts.Limit("allowed droop 28.5 mV", 0.0285))));
+        String hist = HistogramChart.svg(new Histogram("worst droop", "V", mc, 40,
+                List.of(new Limit("allowed droop 28.5 mV", 0.0285))));
         double[] cost = new double[120];
         double[] exc = new double[120];
         for (int k = 0; k < cost.length; k++) {
             cost[k] = 0.6 + 1.6 * rnd.nextDouble();
             exc[k] = 0.018 + 0.012 / (cost[k] - 0.35) * (0.6 + 0.8 * rnd.nextDouble());
         }
-        double[] chosen = Charts.frontier(cost, exc).stream().filter(p -> p[1] < 0.0285).findFirst().orElseThrow();
-        String frontier = Charts.frontierChart(new Charts.Frontier("cost per board", "USD", "worst excursion", "V",
-                cost, exc, List.of(new Charts.Limit("allowed 28.5 mV", 0.0285)),
-                List.of(new Charts.LabelledPoint("cheapest bank within the limit", chosen[0], chosen[1]))));
+        double[] chosen = FrontierChart.nonDominated(cost, exc).stream().filter(p -> p[1] < 0.0285).findFirst().orElseThrow();
+        String frontier = FrontierChart.svg(new Frontier("cost per board", "USD", "worst excursion", "V",
+                cost, exc, List.of(new Limit("allowed 28.5 mV", 0.0285)),
+                List.of(new LabelledPoint("cheapest bank within the limit", chosen[0], chosen[1]))));
         List<Section> sections = new ArrayList<>();
         sections.add(Section.text("Tolerance spread",
                         "2000 invented samples of the worst droop with part values drawn inside their tolerances.")

@@ -1,5 +1,6 @@
 package breakwater.report;
 
+import breakwater.report.chart.ImpedanceChart;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
@@ -28,7 +29,7 @@ class ExampleReportWriter {
         try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
             HtmlReport.write(ExampleReport.model(), w);
         }
-        Files.writeString(dir.resolve("impedance.svg"), Charts.impedanceChart(ExampleReport.model().impedance()));
+        Files.writeString(dir.resolve("impedance.svg"), ImpedanceChart.svg(ExampleReport.model().impedance()));
         assertThat(Files.size(file)).isPositive();
     }
 }

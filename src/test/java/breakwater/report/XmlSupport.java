@@ -14,14 +14,14 @@ import java.util.List;
 import org.xml.sax.InputSource;
 
 /** Parses markup with the JDK's own XML parser (namespace-aware, no external entities or DTDs fetched). */
-final class XmlSupport {
+public final class XmlSupport {
     static final String XHTML = "http://www.w3.org/1999/xhtml";
-    static final String SVG = "http://www.w3.org/2000/svg";
+    public static final String SVG = "http://www.w3.org/2000/svg";
 
     private XmlSupport() {
     }
 
-    static Document parse(String xml) throws Exception {
+    public static Document parse(String xml) throws Exception {
         DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
         f.setNamespaceAware(true);
         f.setExpandEntityReferences(false);
@@ -49,7 +49,7 @@ final class XmlSupport {
     }
 
     /** Text content of every SVG text element, in document order. */
-    static List<String> svgTexts(Node root) {
+    public static List<String> svgTexts(Node root) {
         return elements(root, SVG, "text").stream().map(e -> e.getTextContent().strip()).toList();
     }
 }
