@@ -8,6 +8,9 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.TreeSet;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import java.util.stream.Stream;
 
 import static org.assertj.core.api.Assertions.assertThat;
@@ -44,6 +47,38 @@ class ArchitectureTest {
                 String.join("\n", found.stream().map(Object::toString).toList())).isEmpty();
         assertThat(rules.unusedExceptions()).as("temporary exceptions no file needs any more: delete them from "
                 + "ArchitectureRules.TEMPORARY_EXCEPTIONS").isEmpty();
+    }
+
+    @Test
+    void everyPackageIsInTheOrderAndHasAPackageInfoNamingItsDocument() throws IOException {
+        ArchitectureRules rules = ArchitectureRules.documented();
+        TreeSet<String> packages = new TreeSet<>();
+        for (Path p : mainSources()) {
+            packages.add(MAIN.relativize(p.getParent()).toString().replace('\\', '/').replace('/', '.'));
+        }
+        Pattern doc = Pattern.compile("docs/([a-z-]+\\.md)");
+        List<String> problems = new ArrayList<>();
+        for (String pkg : packages) {
+            if (rules.layerOf(pkg) < 0) {
+                problems.add("breakwater." + pkg + ": not in the documented package order");
+            }
+            Path info = MAIN.resolve(pkg.replace('.', '/')).resolve("package-info.java");
+            if (!Files.isRegularFile(info)) {
+                problems.add("breakwater." + pkg + ": no package-info.java (role, what it may use, which doc to read)");
+                continue;
+            }
+            Matcher m = doc.matcher(Files.readString(info));
+            if (!m.find()) {
+                problems.add(relative(info) + ": names no document in docs/");
+            }
+            m.reset();
+            while (m.find()) {
+                if (!Files.isRegularFile(ROOT.resolve("docs").resolve(m.group(1)))) {
+                    problems.add(relative(info) + ": names docs/" + m.group(1) + ", which does not exist");
+                }
+            }
+        }
+        assertThat(problems).as(String.join("\n", problems)).isEmpty();
     }
 
     // ---- the checker on sources in memory ------------------------------------------------------------
