@@ -17,7 +17,9 @@ final class SearchOptions {
     Duration timeLimit;
 
     @Option(names = "--moves", paramLabel = "N",
-            description = "Stop each solver after N evaluated moves; with --seed the result is reproducible.")
+            description = "Stop each solver after N evaluated moves; with --seed the run is reproducible: the "
+                    + "same bank and files, and the same count of banks evaluated (every judgement a solver "
+                    + "asked for, answers from the memo of judged banks included, summed over solvers).")
     long moves;
 
     @Option(names = "--solvers", paramLabel = "N",

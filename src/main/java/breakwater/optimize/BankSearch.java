@@ -96,7 +96,7 @@ public final class BankSearch {
         }
         double elapsed = (System.nanoTime() - startNanos) / 1e9;
         return java.util.Optional.of(new SearchProgress(elapsed, CapacitorBank.of(candidates, counts),
-                pool.judge(counts), pool.evaluations()));
+                pool.peek(counts), pool.requests()));
     }
 
     /** Runs the search from {@code start} (may be empty) and returns the best bank. */
@@ -154,7 +154,7 @@ public final class BankSearch {
             synchronized (this) {
                 improvements = List.copyOf(history);
             }
-            return new SearchResult(CapacitorBank.of(candidates, best), pool.judge(best), pool.evaluations(),
+            return new SearchResult(CapacitorBank.of(candidates, best), pool.judge(best), pool.requests(),
                     seconds, settings.seed(), settings.solvers(), stopRequested.get(), improvements);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
@@ -271,10 +271,14 @@ public final class BankSearch {
 
     SolverConfig config(SearchSettings settings, long seed, Duration timeLimit) {
         TerminationConfig termination = new TerminationConfig()
-                .withSpentLimit(Duration.ofMillis(Math.max(1, timeLimit.toMillis())))
-                .withUnimprovedSpentLimit(settings.unimprovedLimit());
+                .withSpentLimit(Duration.ofMillis(Math.max(1, timeLimit.toMillis())));
         if (settings.moveLimit() > 0) {
+            // a move-limited run stops on its move count alone (the time limit only guards against a
+            // hang): a stop after some wall-clock time without improvement would end it after a number of
+            // moves that depends on the machine's speed, and so would the count of banks it judged
             termination.setMoveCountLimit(settings.moveLimit());
+        } else {
+            termination.setUnimprovedSpentLimit(settings.unimprovedLimit());
         }
         UnionMoveSelectorConfig moves = new UnionMoveSelectorConfig().withMoveSelectors(
                 new ChangeMoveSelectorConfig().withFixedProbabilityWeight(1.0),

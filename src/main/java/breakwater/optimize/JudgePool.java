@@ -15,6 +15,12 @@ import java.util.concurrent.atomic.AtomicLong;
  * thread (judges keep scratch arrays and are not thread-safe), and a memo of judgements by count vector.
  * Local search re-evaluates the same neighbours many times (every move is done, scored and undone), and
  * the worst-case computation dominates the cost of a score, so the memo pays for itself quickly.
+ *
+ * <p>Two counts: {@link #requests()}, every judgement the search asked for (memo hits included), and
+ * {@link #computed()}, the memo misses. With several solver threads the second depends on thread timing
+ * (which thread asks first for a bank both meet); the first does not, because each solver's sequence of
+ * requests is fixed by its seed and its move limit. The search reports the first, so a move-limited run
+ * repeats it exactly; live progress looks up through {@link #peek}, which is not counted.
  */
 public final class JudgePool {
     private static final int MEMO_LIMIT = 400_000;
@@ -23,8 +29,8 @@ public final class JudgePool {
     private final List<Part> candidates;
     private final ThreadLocal<CandidateJudge> judges;
     private final ConcurrentHashMap<Key, Judgement> memo = new ConcurrentHashMap<>();
-    private final AtomicLong evaluations = new AtomicLong();
-    private final AtomicLong lookups = new AtomicLong();
+    private final AtomicLong computed = new AtomicLong();
+    private final AtomicLong requests = new AtomicLong();
 
     public JudgePool(BankEvaluator evaluator, List<Part> candidates) {
         this.evaluator = evaluator;
@@ -40,16 +46,28 @@ public final class JudgePool {
         return evaluator;
     }
 
-    /** Judges {@code counts} (aligned with {@link #candidates()}), from the memo when seen before. */
+    /**
+     * Judges {@code counts} (aligned with {@link #candidates()}), from the memo when seen before; counted in
+     * {@link #requests()}.
+     */
     public Judgement judge(int[] counts) {
-        lookups.incrementAndGet();
+        requests.incrementAndGet();
+        return lookUp(counts);
+    }
+
+    /** As {@link #judge}, but not counted: for looks from outside the search (live progress). */
+    public Judgement peek(int[] counts) {
+        return lookUp(counts);
+    }
+
+    private Judgement lookUp(int[] counts) {
         Key key = new Key(counts.clone());
         Judgement j = memo.get(key);
         if (j != null) {
             return j;
         }
         j = judges.get().judge(counts);
-        evaluations.incrementAndGet();
+        computed.incrementAndGet();
         if (memo.size() > MEMO_LIMIT) {
             memo.clear();
         }
@@ -62,14 +80,17 @@ public final class JudgePool {
         return new CandidateJudge(evaluator, candidates).judge(counts);
     }
 
-    /** Banks actually evaluated (memo misses). */
-    public long evaluations() {
-        return evaluations.get();
+    /**
+     * Judgements asked for through {@link #judge}, memo hits included, summed over every thread: the same
+     * on every run of a move-limited search with the same seed, however many solvers.
+     */
+    public long requests() {
+        return requests.get();
     }
 
-    /** Score requests, including memo hits. */
-    public long lookups() {
-        return lookups.get();
+    /** Judgements computed afresh (memo misses, {@link #peek} included); depends on thread timing. */
+    public long computed() {
+        return computed.get();
     }
 
     private record Key(int[] counts) {

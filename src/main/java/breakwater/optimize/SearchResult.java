@@ -8,7 +8,8 @@ import breakwater.design.Judgement;
  *
  * @param bank         best bank
  * @param judgement    its solver-grid judgement (the caller re-evaluates it fully for the verdict)
- * @param evaluations  banks evaluated (memo misses), over all solvers
+ * @param evaluations  banks evaluated: every judgement the search asked for, memo hits included, summed
+ *                     over all solvers (so a move-limited run with the same seed repeats it exactly)
  * @param seconds      wall-clock time spent
  * @param seed         seed of the first solver
  * @param solvers      solvers that ran

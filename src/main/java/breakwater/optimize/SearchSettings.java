@@ -7,9 +7,11 @@ import java.util.Objects;
  * How long and how widely to search.
  *
  * @param timeLimit        wall-clock budget for the whole search
- * @param unimprovedLimit  stop a solver that has not improved its best for this long
+ * @param unimprovedLimit  stop a solver that has not improved its best for this long (and restart it);
+ *                         not used with a move limit, whose runs must not depend on the machine's speed
  * @param moveLimit        stop each solver after this many evaluated moves (0 = no limit); with a seed
- *                         this makes a run reproducible
+ *                         this makes a run reproducible: the same bank, files and count of banks
+ *                         evaluated (the time limit then only guards against a solver that never ends)
  * @param seed             seed of the first solver; solver k uses seed + k
  * @param solvers          independent solvers run in parallel (the free solver edition has no
  *                         multithreaded solving, so we run several seeded ones and keep the best)
