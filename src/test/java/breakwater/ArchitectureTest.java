@@ -123,14 +123,14 @@ class ArchitectureTest {
     }
 
     @Test
-    void siblingsStayIndependentButReportAndItsChartsAreOneLayer() {
+    void siblingsStayIndependentAndTheChartsSitBelowTheReport() {
         assertThat(check("catalog/A.java", "package breakwater.catalog;\nimport breakwater.scenario.Band;\n"))
                 .singleElement().asString().contains("sibling");
         assertThat(check("report/A.java", "package breakwater.report;\nimport breakwater.report.chart.X;\n"))
                 .isEmpty();
         assertThat(check("report/chart/A.java", "package breakwater.report.chart;\n"
-                + "import breakwater.report.ReportModel;\nimport breakwater.cli.Main;\n"))
-                .singleElement().asString().startsWith("report/chart/A.java:3:");
+                + "import breakwater.report.ReportModel;\nimport breakwater.optimize.BankSearch;\n"))
+                .singleElement().asString().startsWith("report/chart/A.java:2:");
     }
 
     @Test
@@ -158,7 +158,12 @@ class ArchitectureTest {
 
     @Test
     void aTemporaryExceptionCoversOnlyItsFileAndItsFrameworkAndIsReportedOnceUnused() {
-        ArchitectureRules rules = ArchitectureRules.documented();
+        ArchitectureRules rules = new ArchitectureRules(ArchitectureRules.ORDER, ArchitectureRules.FRAMEWORKS,
+                java.util.List.of(
+                        new ArchitectureRules.TemporaryException("cli/Results.java", "Jackson", "a test"),
+                        new ArchitectureRules.TemporaryException("cli/RunExtras.java", "Jackson", "a test"),
+                        new ArchitectureRules.TemporaryException("report/Charts.java", "JFreeChart / JFreeSVG",
+                                "a test")));
         String jackson = "package breakwater.cli;\nimport com.fasterxml.jackson.databind.node.ObjectNode;\n";
         assertThat(rules.check("cli/Results.java", jackson)).isEmpty();
         assertThat(rules.check("cli/SolveCommand.java", jackson)).singleElement().asString()

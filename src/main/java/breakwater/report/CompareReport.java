@@ -1,5 +1,7 @@
 package breakwater.report;
 
+import breakwater.report.chart.ImpedanceSeries;
+import breakwater.report.chart.WaveformSeries;
 import breakwater.design.Evaluation;
 import breakwater.optimize.CompareResult;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -37,8 +39,8 @@ public final class CompareReport {
     static ModeOutput output(CompareResult r) {
         List<List<String>> table = table(r);
         return new ModeOutput(console(r, table), json -> summary(json, r), List.of(section(r, table)), m -> {
-            List<ReportModel.ImpedanceSeries> z = new ArrayList<>();
-            List<ReportModel.WaveformSeries> w = new ArrayList<>();
+            List<ImpedanceSeries> z = new ArrayList<>();
+            List<WaveformSeries> w = new ArrayList<>();
             for (CompareResult.Row row : r.rows()) {
                 z.add(Overlays.impedance(row.name(), row.evaluation()));
                 w.add(Overlays.waveform(row.name() + ": worst-case droop", row.judge().droopWaveform(row.evaluation())));

@@ -1,5 +1,6 @@
 package breakwater.report;
 
+import breakwater.report.chart.EngineeringFormat;
 import breakwater.report.ReportModel.BomRow;
 import breakwater.report.ReportModel.KeyFigure;
 import breakwater.report.ReportModel.Section;

@@ -1,5 +1,9 @@
 package breakwater.report;
 
+import breakwater.report.chart.ImpedancePlot;
+import breakwater.report.chart.ImpedanceSeries;
+import breakwater.report.chart.WaveformPlot;
+import breakwater.report.chart.WaveformSeries;
 import breakwater.design.Evaluation;
 import breakwater.timedomain.Waveform;
 
@@ -14,28 +18,28 @@ public final class Overlays {
     }
 
     /** |Z| of {@code e} on its report grid, labelled. */
-    public static ReportModel.ImpedanceSeries impedance(String label, Evaluation e) {
+    public static ImpedanceSeries impedance(String label, Evaluation e) {
         return ReportBuilder.impedanceSeries(label, e);
     }
 
     /** A worst-case waveform, thinned for plotting (extremes kept), labelled. */
-    public static ReportModel.WaveformSeries waveform(String label, Waveform w) {
+    public static WaveformSeries waveform(String label, Waveform w) {
         return ReportBuilder.waveformSeries(label, w);
     }
 
     /** The model with these curves on its impedance chart (target, band and markers kept). */
-    public static ReportModel withImpedance(ReportModel m, List<ReportModel.ImpedanceSeries> series) {
-        ReportModel.ImpedancePlot p = m.impedance();
+    public static ReportModel withImpedance(ReportModel m, List<ImpedanceSeries> series) {
+        ImpedancePlot p = m.impedance();
         return new ReportModel(m.title(), m.subtitleLines(), m.verdict(), m.keyFigures(),
-                new ReportModel.ImpedancePlot(series, p.targetOhm(), p.bandFromHz(), p.bandToHz(), p.markers()),
+                new ImpedancePlot(series, p.targetOhm(), p.bandFromHz(), p.bandToHz(), p.markers()),
                 m.worstCase(), m.bom(), m.resonances(), m.sections(), m.settings(), m.cautions());
     }
 
     /** The model with these waveforms on its worst-case chart (limits kept). */
-    public static ReportModel withWorstCase(ReportModel m, List<ReportModel.WaveformSeries> series) {
-        ReportModel.WaveformPlot p = m.worstCase();
+    public static ReportModel withWorstCase(ReportModel m, List<WaveformSeries> series) {
+        WaveformPlot p = m.worstCase();
         return new ReportModel(m.title(), m.subtitleLines(), m.verdict(), m.keyFigures(), m.impedance(),
-                new ReportModel.WaveformPlot(series, p.nominalV(), p.lowerLimitV(), p.upperLimitV()), m.bom(),
+                new WaveformPlot(series, p.nominalV(), p.lowerLimitV(), p.upperLimitV()), m.bom(),
                 m.resonances(), m.sections(), m.settings(), m.cautions());
     }
 

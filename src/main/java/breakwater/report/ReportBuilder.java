@@ -1,5 +1,10 @@
 package breakwater.report;
 
+import breakwater.report.chart.ImpedanceMarker;
+import breakwater.report.chart.ImpedancePlot;
+import breakwater.report.chart.ImpedanceSeries;
+import breakwater.report.chart.WaveformPlot;
+import breakwater.report.chart.WaveformSeries;
 import breakwater.catalog.BankEntry;
 import breakwater.design.Evaluation;
 import breakwater.design.Verdict;
@@ -80,13 +85,13 @@ public final class ReportBuilder {
         keys.add(new ReportModel.KeyFigure("Parts", e.bank().totalParts() + " (" + e.bank().distinctParts() + " types)",
                 e.fitsBoard() ? ReportModel.Tone.NEUTRAL : ReportModel.Tone.BAD));
 
-        List<ReportModel.ImpedanceMarker> markers = new ArrayList<>();
+        List<ImpedanceMarker> markers = new ArrayList<>();
         for (AntiResonance a : m.antiResonances()) {
-            markers.add(new ReportModel.ImpedanceMarker(format(a.frequencyHz(), FREQUENCY), a.frequencyHz(), a.impedanceOhms()));
+            markers.add(new ImpedanceMarker(format(a.frequencyHz(), FREQUENCY), a.frequencyHz(), a.impedanceOhms()));
         }
-        ReportModel.ImpedancePlot imp = new ReportModel.ImpedancePlot(List.of(impedanceSeries("|Z| at the load", e)),
+        ImpedancePlot imp = new ImpedancePlot(List.of(impedanceSeries("|Z| at the load", e)),
                 r.targetImpedanceOhms(), s.band().fromHz(), s.band().toHz(), markers);
-        ReportModel.WaveformPlot wave = new ReportModel.WaveformPlot(
+        WaveformPlot wave = new WaveformPlot(
                 List.of(waveformSeries("worst-case droop pattern", run.droop())), r.voltageV(), r.lowerLimitV(), r.upperLimitV());
 
         List<ReportModel.BomRow> rows = new ArrayList<>();
@@ -136,19 +141,19 @@ public final class ReportBuilder {
                         + (wc.rogueFactor() < 1 ? ": this bank keeps |Z| well under the target, so it stays inside the promise."
                         : ": the target impedance alone would have promised too little.")));
         double window = closeUpWindowS(m, r.edgeTimeS(), run.droop());
-        ReportModel.WaveformSeries close = crop("worst-case droop pattern, close-up", run.droop(), window);
+        WaveformSeries close = crop("worst-case droop pattern, close-up", run.droop(), window);
         if (close != null) {
             sections.add(ReportModel.Section.text("Close-up: the last " + format(window, TIME) + " before the worst instant",
                     "The fast part of the same droop pattern, with time counted from the worst instant: how the "
                             + "load times its swings against the highest anti-resonances" + (r.hasEdgeTime() ? ", never faster than ΔI in " + format(r.edgeTimeS(), TIME) : "")
                             + ".")
-                    .withChart(WorstCaseChart.svg(new ReportModel.WaveformPlot(List.of(close), r.voltageV(),
+                    .withChart(WorstCaseChart.svg(new WaveformPlot(List.of(close), r.voltageV(),
                             r.lowerLimitV(), r.upperLimitV()))));
         }
         sections.add(ReportModel.Section.text("Worst-case overshoot pattern",
                 "The load pattern that drives the voltage highest above the operating point (peak "
                         + ConsoleReport.volts(wc.maxVoltageV()) + ", limit " + ConsoleReport.volts(wc.upperLimitV()) + ").")
-                .withChart(WorstCaseChart.svg(new ReportModel.WaveformPlot(
+                .withChart(WorstCaseChart.svg(new WaveformPlot(
                         List.of(waveformSeries("worst-case overshoot pattern", run.overshoot())),
                         r.voltageV(), r.lowerLimitV(), r.upperLimitV()))));
         sections.addAll(run.extraSections());
@@ -195,7 +200,7 @@ public final class ReportBuilder {
      * The part of {@code w} from {@code window} before its worst instant to a quarter window after, with time
      * counted from the worst instant; null if too short.
      */
-    static ReportModel.WaveformSeries crop(String label, Waveform w, double window) {
+    static WaveformSeries crop(String label, Waveform w, double window) {
         double[] t = w.timeS();
         double[] i = w.loadCurrentA();
         double[] v = w.voltageV();
@@ -221,16 +226,16 @@ public final class ReportBuilder {
         return thin(tt, ii, vv, PLOT_POINTS).labelled(label);
     }
 
-    static ReportModel.ImpedanceSeries impedanceSeries(String label, Evaluation e) {
+    static ImpedanceSeries impedanceSeries(String label, Evaluation e) {
         var c = e.curve();
         double[] mag = new double[c.size()];
         for (int i = 0; i < mag.length; i++) {
             mag[i] = c.magnitudeOhms(i);
         }
-        return new ReportModel.ImpedanceSeries(label, c.frequenciesHz(), mag);
+        return new ImpedanceSeries(label, c.frequenciesHz(), mag);
     }
 
-    static ReportModel.WaveformSeries waveformSeries(String label, Waveform w) {
+    static WaveformSeries waveformSeries(String label, Waveform w) {
         return thin(w.timeS(), w.loadCurrentA(), w.voltageV(), PLOT_POINTS).labelled(label);
     }
 
@@ -282,8 +287,8 @@ public final class ReportBuilder {
 
     /** Waveform samples on a common time base: time, load current, load voltage. */
     record Samples(double[] timeS, double[] currentA, double[] voltageV) {
-        ReportModel.WaveformSeries labelled(String label) {
-            return new ReportModel.WaveformSeries(label, timeS, currentA, voltageV);
+        WaveformSeries labelled(String label) {
+            return new WaveformSeries(label, timeS, currentA, voltageV);
         }
     }
 }

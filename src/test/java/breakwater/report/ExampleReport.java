@@ -1,17 +1,17 @@
 package breakwater.report;
 
+import breakwater.report.chart.ImpedanceMarker;
+import breakwater.report.chart.ImpedancePlot;
+import breakwater.report.chart.ImpedanceSeries;
+import breakwater.report.chart.WaveformPlot;
+import breakwater.report.chart.WaveformSeries;
 import breakwater.report.ReportModel.Bom;
 import breakwater.report.ReportModel.BomRow;
-import breakwater.report.ReportModel.ImpedanceMarker;
-import breakwater.report.ReportModel.ImpedancePlot;
-import breakwater.report.ReportModel.ImpedanceSeries;
 import breakwater.report.ReportModel.KeyFigure;
 import breakwater.report.ReportModel.Section;
 import breakwater.report.ReportModel.Table;
 import breakwater.report.ReportModel.Tone;
 import breakwater.report.ReportModel.Verdict;
-import breakwater.report.ReportModel.WaveformPlot;
-import breakwater.report.ReportModel.WaveformSeries;
 import breakwater.report.chart.Frontier;
 import breakwater.report.chart.FrontierChart;
 import breakwater.report.chart.Histogram;

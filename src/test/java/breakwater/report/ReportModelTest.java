@@ -1,9 +1,9 @@
 package breakwater.report;
 
-import breakwater.report.ReportModel.ImpedanceSeries;
+import breakwater.report.chart.ImpedanceSeries;
+import breakwater.report.chart.WaveformPlot;
+import breakwater.report.chart.WaveformSeries;
 import breakwater.report.ReportModel.Table;
-import breakwater.report.ReportModel.WaveformPlot;
-import breakwater.report.ReportModel.WaveformSeries;
 import org.junit.jupiter.api.Test;
 
 import java.util.List;

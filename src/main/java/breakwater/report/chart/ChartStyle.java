@@ -1,6 +1,5 @@
 package breakwater.report.chart;
 
-import breakwater.report.EngineeringFormat;
 
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.LegendItem;

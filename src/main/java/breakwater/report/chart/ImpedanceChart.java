@@ -1,8 +1,5 @@
 package breakwater.report.chart;
 
-import breakwater.report.ReportModel.ImpedanceMarker;
-import breakwater.report.ReportModel.ImpedancePlot;
-import breakwater.report.ReportModel.ImpedanceSeries;
 
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.LegendItem;

@@ -1,7 +1,5 @@
 package breakwater.report.chart;
 
-import breakwater.report.ReportModel.WaveformPlot;
-import breakwater.report.ReportModel.WaveformSeries;
 
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.LegendItem;

@@ -8,5 +8,11 @@
  * <p>{@code ChartStyle} holds what the charts share (size, colours, fonts, strokes, tick formats),
  * {@code Axes} the axes, and {@link breakwater.report.chart.SvgWriter} draws a chart into SVG. This is the
  * only package importing JFreeChart and JFreeSVG; no type of theirs appears in a public signature.
+ *
+ * <p>May use the packages before {@code report} ({@code units} … {@code optimize}), never {@code report}
+ * itself: the input records ({@code ImpedancePlot}, {@code WaveformPlot}, …) and the axis format
+ * {@link breakwater.report.chart.EngineeringFormat} live here, and {@code report} fills them.
+ *
+ * <p>Read: {@code docs/architecture.md} (the package order), {@code docs/file-contracts.md} (the report).
  */
 package breakwater.report.chart;

@@ -1,10 +1,6 @@
 package breakwater.report.chart;
 
 import breakwater.report.ExampleReport;
-import breakwater.report.ReportModel.ImpedanceMarker;
-import breakwater.report.ReportModel.ImpedancePlot;
-import breakwater.report.ReportModel.WaveformPlot;
-import breakwater.report.ReportModel.WaveformSeries;
 import breakwater.report.XmlSupport;
 import org.w3c.dom.Document;
 import org.w3c.dom.Element;

@@ -1,4 +1,4 @@
-package breakwater.report;
+package breakwater.report.chart;
 
 import java.math.BigDecimal;
 import java.math.MathContext;

@@ -1,4 +1,4 @@
-package breakwater.report;
+package breakwater.report.chart;
 
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
