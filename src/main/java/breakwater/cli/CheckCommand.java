@@ -38,15 +38,19 @@ final class CheckCommand implements Callable<Integer> {
     @Mixin
     MonteCarloOptions monteCarlo;
 
+    @Mixin
+    ExportOptions export;
+
     @Override
     public Integer call() throws Exception {
+        export.requireOut(output);
         Inputs in = Inputs.load(scenarioFile, output.footprint);
         List<BankEntry> entries = BankFileReader.read(bankFile, Inputs.display(bankFile), in.catalog());
         BankEvaluator evaluator = new BankEvaluator(in.scenario(), in.footprint());
         Evaluation e = evaluator.evaluate(new CapacitorBank(entries));
         RunExtras mc = monteCarlo.run(evaluator, e.bank(), in.scenario(), output.quiet || output.json,
                 spec.commandLine().getErr());
-        return Results.emit("check", in, output.footprint, evaluator, e, java.util.Optional.empty(), mc, output,
+        return Results.emit("check", in, output.footprint, evaluator, e, java.util.Optional.empty(), mc, output, export,
                 spec.commandLine().getOut(), spec.commandLine().getErr());
     }
 }

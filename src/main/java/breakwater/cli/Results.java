@@ -43,6 +43,13 @@ final class Results {
     static int emit(String mode, Inputs in, String footprintName, BankEvaluator evaluator, Evaluation e,
                     Optional<SearchResult> search, RunExtras extras, OutputOptions output, PrintWriter out,
                     PrintWriter err) throws IOException {
+        return emit(mode, in, footprintName, evaluator, e, search, extras, output, ExportOptions.none(), out, err);
+    }
+
+    /** As above, also writing the files of {@code export} into --out. */
+    static int emit(String mode, Inputs in, String footprintName, BankEvaluator evaluator, Evaluation e,
+                    Optional<SearchResult> search, RunExtras extras, OutputOptions output, ExportOptions export,
+                    PrintWriter out, PrintWriter err) throws IOException {
         ObjectNode summary = SummaryJson.of(mode, in.scenario(), footprintName, e);
         boolean bankMeets = Verdicts.meetsSpec(in.scenario(), e);
         // one verdict everywhere (console, JSON, report, exit code): the bank's and the mode's together
@@ -93,6 +100,7 @@ final class Results {
             Waveform overshoot = evaluator.overshootWaveform(e);
             dir.write("worst-case.csv", w -> CsvOutputs.writeWorstCase(droop, w));
             written.add("worst-case.csv");
+            written.addAll(export.write(dir, in, footprintName, evaluator, e, droop, overshoot));
             ReportModel built = extras.model().apply(ReportBuilder.build(new ReportBuilder.Run(mode, in.scenario(),
                     footprintName, e, droop, overshoot, search, extras.sections())));
             ReportModel model = meets || !built.verdict().meetsSpec() ? built : withVerdict(built,

@@ -67,6 +67,9 @@ final class SolveCommand implements Callable<Integer> {
     @Mixin
     MonteCarloOptions monteCarlo;
 
+    @Mixin
+    ExportOptions export;
+
     @Option(names = "--margin", paramLabel = "VOLTAGE", converter = VoltageConverter.class,
             description = "Keep the worst case at least this far inside the tolerance band on both sides "
                     + "(e.g. 1mV): a design margin for part spread and model error. Default: [solver] margin, "
@@ -145,6 +148,7 @@ final class SolveCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        export.requireOut(output);
         Inputs in = Inputs.load(scenarioFile, output.footprint);
         BankEvaluator evaluator = new BankEvaluator(in.scenario(), in.footprint());
         // --margin overrides the scenario's [solver] margin
@@ -174,7 +178,7 @@ final class SolveCommand implements Callable<Integer> {
                 extras = extras.plus(marginExtras(e, margin, marginSource));
             }
             return Results.emit("solve", in, output.footprint, evaluator, e, java.util.Optional.of(result), extras,
-                    output, spec.commandLine().getOut(), err);
+                    output, export, spec.commandLine().getOut(), err);
         }
     }
 }

@@ -75,8 +75,12 @@ final class TrimCommand implements Callable<Integer> {
     @Mixin
     MonteCarloOptions monteCarlo;
 
+    @Mixin
+    ExportOptions export;
+
     @Override
     public Integer call() throws Exception {
+        export.requireOut(output);
         Inputs in = Inputs.load(scenarioFile, output.footprint);
         Path file = bankFile != null ? bankFile : in.scenario().existingBank().orElseThrow(() -> new UsageException(
                 "trim needs a bank to start from: give --bank FILE, or name one in the scenario's [existing] "
@@ -120,7 +124,7 @@ final class TrimCommand implements Callable<Integer> {
                     && e.figures().overshootV() <= old.figures().overshootV());
             RunExtras extras = extras(in, specJudge, old, e, d, kept)
                     .plus(monteCarlo.run(specJudge, d.chosen(), in.scenario(), quiet, err));
-            return Results.emit("trim", in, output.footprint, specJudge, e, Optional.of(result), extras, output,
+            return Results.emit("trim", in, output.footprint, specJudge, e, Optional.of(result), extras, output, export,
                     spec.commandLine().getOut(), err);
         }
     }
