@@ -39,7 +39,7 @@ final class ArchitectureRules {
             new Layer(List.of("timedomain"), true),
             new Layer(List.of("design"), true),
             new Layer(List.of("optimize"), true),
-            new Layer(List.of("report.chart"), true),
+            new Layer(List.of("report.chart", "report.export"), true),
             new Layer(List.of("report"), true),
             new Layer(List.of("cli"), true));
 

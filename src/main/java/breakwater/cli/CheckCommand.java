@@ -3,6 +3,7 @@ package breakwater.cli;
 import breakwater.design.BankEvaluator;
 import breakwater.design.CheckResult;
 import breakwater.report.CheckReport;
+import breakwater.report.ResultWriter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -32,17 +33,21 @@ final class CheckCommand implements Callable<Integer> {
     OutputOptions output;
 
     @Mixin
+    ExportOptions export;
+
+    @Mixin
     MonteCarloOptions monteCarlo;
 
     @Override
     public Integer call() throws Exception {
+        ResultWriter.Target target = export.target(output);
         Inputs in = scenario.load(output.footprint);
         var bank = in.bank(bankFile);
         BankEvaluator judge = new BankEvaluator(in.scenario(), in.footprint());
         try (Searches progress = new Searches(spec.commandLine().getErr(), output.silent(), false)) {
             CheckResult r = CheckResult.check(judge, output.footprint, bank, monteCarlo.settings(in.scenario()),
                     progress);
-            CheckReport.write(r, output.target(), spec.commandLine().getOut());
+            CheckReport.write(r, target, spec.commandLine().getOut());
             return ExitCodes.of(r.verdict());
         }
     }

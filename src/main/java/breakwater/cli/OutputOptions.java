@@ -46,7 +46,7 @@ final class OutputOptions {
 
     /** Where the results go; {@code quiet} also when the JSON takes standard output. */
     ResultWriter.Target target() {
-        return new ResultWriter.Target(json, quiet, outDir(), out == null ? "" : Inputs.display(out));
+        return new ResultWriter.Target(json, quiet, outDir(), out == null ? "" : Inputs.display(out), java.util.List.of());
     }
 
     /** No progress on the error stream: --quiet, or --json (the JSON alone on standard output). */

@@ -4,6 +4,7 @@ import breakwater.design.BankEvaluator;
 import breakwater.design.DesignMargin;
 import breakwater.optimize.SolveResult;
 import breakwater.report.SolveReport;
+import breakwater.report.ResultWriter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -42,6 +43,9 @@ final class SolveCommand implements Callable<Integer> {
     OutputOptions output;
 
     @Mixin
+    ExportOptions export;
+
+    @Mixin
     SearchOptions search;
 
     @Mixin
@@ -64,6 +68,7 @@ final class SolveCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        ResultWriter.Target target = export.target(output);
         Inputs in = scenario.load(output.footprint);
         BankEvaluator judge = new BankEvaluator(in.scenario(), in.footprint());
         var settings = search.settings(in.scenario());
@@ -72,7 +77,7 @@ final class SolveCommand implements Callable<Integer> {
         try (Searches progress = new Searches(spec.commandLine().getErr(), output.quiet, true)) {
             SolveResult r = SolveResult.solve(judge, output.footprint, in.catalog().parts(), settings,
                     margin(in.scenario().designMarginV()), draws, progress);
-            SolveReport.write(r, output.target(), spec.commandLine().getOut());
+            SolveReport.write(r, target, spec.commandLine().getOut());
             return ExitCodes.of(r.verdict());
         }
     }

@@ -4,6 +4,7 @@ import breakwater.design.BankEvaluator;
 import breakwater.optimize.CostDown;
 import breakwater.optimize.TrimResult;
 import breakwater.report.TrimReport;
+import breakwater.report.ResultWriter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -49,6 +50,9 @@ final class TrimCommand implements Callable<Integer> {
     OutputOptions output;
 
     @Mixin
+    ExportOptions export;
+
+    @Mixin
     SearchOptions search;
 
     @Mixin
@@ -56,6 +60,7 @@ final class TrimCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        ResultWriter.Target target = export.target(output);
         Inputs in = scenario.load(output.footprint);
         Path file = in.existingBankFile(bankFile);
         var existing = in.bank(file);
@@ -65,7 +70,7 @@ final class TrimCommand implements Callable<Integer> {
         try (Searches progress = new Searches(spec.commandLine().getErr(), output.silent(), true)) {
             TrimResult r = TrimResult.trim(judge, output.footprint, Inputs.display(file), existing, keep,
                     in.catalog().parts(), settings, draws, progress);
-            TrimReport.write(r, output.target(), spec.commandLine().getOut());
+            TrimReport.write(r, target, spec.commandLine().getOut());
             return ExitCodes.of(r.verdict());
         }
     }

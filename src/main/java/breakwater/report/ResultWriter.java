@@ -6,6 +6,8 @@ import breakwater.design.Verdict;
 import breakwater.optimize.SearchResult;
 import breakwater.report.chart.ImpedanceChart;
 import breakwater.report.chart.WorstCaseChart;
+import breakwater.report.export.ExportFormat;
+import breakwater.report.export.ExportedRail;
 import breakwater.timedomain.Waveform;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
@@ -35,11 +37,22 @@ public final class ResultWriter {
      * @param quiet      print nothing (but the JSON with {@code json})
      * @param outDir     the folder for the result files, if any
      * @param outDirName how the user knows that folder (in the "Wrote ..." line)
+     * @param exports    the files for other tools to write beside the results (SPICE decks, Touchstone)
      */
-    public record Target(boolean json, boolean quiet, Optional<Path> outDir, String outDirName) {
+    public record Target(boolean json, boolean quiet, Optional<Path> outDir, String outDirName,
+                         List<ExportFormat> exports) {
         public Target {
             Objects.requireNonNull(outDir, "outDir");
             Objects.requireNonNull(outDirName, "outDirName");
+            exports = List.copyOf(exports);
+            if (!exports.isEmpty() && outDir.isEmpty()) {
+                throw new IllegalArgumentException("exports are written into the output folder; none was given");
+            }
+        }
+
+        /** The same target, also writing {@code formats}. */
+        public Target withExports(List<ExportFormat> formats) {
+            return new Target(json, quiet, outDir, outDirName, formats);
         }
     }
 
@@ -89,6 +102,8 @@ public final class ResultWriter {
             Waveform overshoot = run.judge().overshootWaveform(e);
             dir.write("worst-case.csv", w -> CsvOutputs.writeWorstCase(droop, w));
             written.add("worst-case.csv");
+            written.addAll(RailExports.write(dir, target.exports(), new ExportedRail(scenario, run.footprintName(),
+                    run.judge().footprint(), e, droop, overshoot, ExportedRail.programVersion())));
             ReportModel model = mode.model().apply(ReportBuilder.build(new ReportBuilder.Run(run.mode(), scenario,
                     run.footprintName(), e, run.verdict(), droop, overshoot, run.search(), mode.sections())));
             dir.write("impedance.svg", w -> w.write(ImpedanceChart.svg(model.impedance())));
