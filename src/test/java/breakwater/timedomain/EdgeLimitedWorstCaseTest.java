@@ -37,7 +37,7 @@ class EdgeLimitedWorstCaseTest {
             for (boolean droop : new boolean[]{true, false}) {
                 double[] u = new double[lags.length];
                 double dp = WorstCaseAnalyzer.edgeLimitedOnGrid(m, lags, te, droop, u);
-                double[] w = WorstCaseAnalyzer.objectiveWeights(m, lags);
+                double[] w = HatWeights.onLags(m, lags);
                 if (!droop) {
                     for (int k = 0; k < w.length; k++) {
                         w[k] = -w[k];
@@ -108,7 +108,7 @@ class EdgeLimitedWorstCaseTest {
         double ideal = WorstCaseAnalyzer.idealEdges(m).droopOhms();
         for (double te : new double[]{1e-12, 0.5e-9, 10e-9}) {
             double droop = WorstCaseAnalyzer.edgeLimited(m, te).droopOhms();
-            double[] lags = WorstCaseAnalyzer.lagGrid(m, te);
+            double[] lags = LagGrid.lags(m, te);
             double[] fine = new double[2 * lags.length - 1];
             for (int i = 0; i < lags.length; i++) {
                 fine[2 * i] = lags[i];
@@ -166,13 +166,13 @@ class EdgeLimitedWorstCaseTest {
         double te = 10e-9;
         LoadPattern ramped = movingAverage(WorstCaseAnalyzer.idealEdges(m).droopPattern(), te);
         assertThat(ramped.maxSlopePerS()).isLessThanOrEqualTo(1 / te * (1 + 1e-9));
-        assertThat(WorstCaseAnalyzer.edgeLimited(m, te).droopOhms()).isGreaterThan(10 * WorstCaseAnalyzer.response(m, ramped));
+        assertThat(WorstCaseAnalyzer.edgeLimited(m, te).droopOhms()).isGreaterThan(10 * HatWeights.response(m, ramped));
 
         PoleResidueModel m2 = PoleResidueModel.of(Networks.realistic());
         LoadPattern ideal2 = WorstCaseAnalyzer.idealEdges(m2).droopPattern();
         double te2 = 20e-9;
         assertThat(WorstCaseAnalyzer.edgeLimited(m2, te2).droopOhms())
-                .isGreaterThan(2 * WorstCaseAnalyzer.response(m2, movingAverage(ideal2, te2)));
+                .isGreaterThan(2 * HatWeights.response(m2, movingAverage(ideal2, te2)));
     }
 
     /**
@@ -190,7 +190,7 @@ class EdgeLimitedWorstCaseTest {
             PoleResidueModel m = PoleResidueModel.of(net);
             LoadPattern ideal = WorstCaseAnalyzer.idealEdges(m).droopPattern();
             for (double te : new double[]{0.5e-9, 1e-9, 5e-9, 20e-9}) {
-                double ramped = WorstCaseAnalyzer.response(m, movingAverage(ideal, te));
+                double ramped = HatWeights.response(m, movingAverage(ideal, te));
                 assertThat(WorstCaseAnalyzer.edgeLimited(m, te).droopOhms()).isGreaterThan(ramped * (1 - 1e-3));
             }
         }

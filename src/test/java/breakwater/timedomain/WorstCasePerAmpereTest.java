@@ -63,7 +63,7 @@ class WorstCasePerAmpereTest {
 
     /**
      * The block-wise weights (tabulated powers e^{pmΔ}, amplitude advanced per block) against the
-     * lag-by-lag sum of the same closed forms ({@link WorstCaseAnalyzer#objectiveWeights}) on the same
+     * lag-by-lag sum of the same closed forms ({@link HatWeights#onLags}) on the same
      * lags, and the optimum against the dynamic program on those reference weights. Tolerance 1e-11 of
      * Σ|w|: both are products of up to 1e5 rounded factors (1e-16 each) in a different order; measured
      * below 4e-13 on random networks.
@@ -73,8 +73,8 @@ class WorstCasePerAmpereTest {
             throws Exception {
         PoleResidueModel m = PoleResidueModel.of(network(seed));
         double te = Math.pow(10, logTe);
-        double[] lags = WorstCaseAnalyzer.lagGrid(m, te);
-        double[] reference = WorstCaseAnalyzer.objectiveWeights(m, lags);
+        double[] lags = LagGrid.lags(m, te);
+        double[] reference = HatWeights.onLags(m, lags);
         double[] fast = WorstCaseAnalyzer.gridObjectiveWeights(m, te);
         assertThat(fast).hasSameSizeAs(reference);
         double scale = 0;
