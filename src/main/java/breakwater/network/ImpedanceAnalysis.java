@@ -83,9 +83,9 @@ public final class ImpedanceAnalysis {
                 }
                 continue;
             }
-            double[] refined = refine(mag, f[i - 1], f[i + 1], localMax ? GoalType.MAXIMIZE : GoalType.MINIMIZE);
-            double fr = refined[0];
-            double zr = refined[1];
+            Extremum refined = refine(mag, f[i - 1], f[i + 1], localMax ? GoalType.MAXIMIZE : GoalType.MINIMIZE);
+            double fr = refined.frequencyHz();
+            double zr = refined.magnitudeOhms();
             if (!band.contains(fr)) {
                 continue;
             }
@@ -123,16 +123,22 @@ public final class ImpedanceAnalysis {
         return peak - Math.max(leftLow, rightLow);
     }
 
-    /** Brent search on ln f in [lo, hi]; returns {f, |Z|(f)}. */
-    static double[] refine(DoubleUnaryOperator mag, double loHz, double hiHz, GoalType goal) {
+    /**
+     * A refined extremum of |Z|.
+     *
+     * @param frequencyHz   where it lies
+     * @param magnitudeOhms |Z| there
+     */
+    public record Extremum(double frequencyHz, double magnitudeOhms) {
+    }
+
+    /** Brent search on ln f in [lo, hi]. */
+    static Extremum refine(DoubleUnaryOperator mag, double loHz, double hiHz, GoalType goal) {
         return refineExtremum(mag, loHz, hiHz, goal == GoalType.MAXIMIZE);
     }
 
-    /**
-     * Brent search for the maximum (or minimum) of |Z| on ln f in [lo, hi], as the full analysis does;
-     * returns {f, |Z|(f)}.
-     */
-    public static double[] refineExtremum(DoubleUnaryOperator mag, double loHz, double hiHz, boolean maximum) {
+    /** Brent search for the maximum (or minimum) of |Z| on ln f in [lo, hi], as the full analysis does. */
+    public static Extremum refineExtremum(DoubleUnaryOperator mag, double loHz, double hiHz, boolean maximum) {
         GoalType goal = maximum ? GoalType.MAXIMIZE : GoalType.MINIMIZE;
         BrentOptimizer brent = new BrentOptimizer(1e-10, 1e-14);
         double a = Math.log(loHz);
@@ -141,7 +147,7 @@ public final class ImpedanceAnalysis {
                 new UnivariateObjectiveFunction(x -> mag.applyAsDouble(Math.exp(x))), goal,
                 new SearchInterval(a, b, 0.5 * (a + b)));
         double fr = Math.exp(best.getPoint());
-        return new double[] {fr, best.getValue()};
+        return new Extremum(fr, best.getValue());
     }
 
     /** Q from the curvature of |Z| at a peak (see class Javadoc); two passes to pick a step suited to Q. */

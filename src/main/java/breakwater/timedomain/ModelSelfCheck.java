@@ -78,9 +78,9 @@ final class ModelSelfCheck {
             fHi = Math.max(fHi, f);
         }
         if (modes == 0) {
-            double[] r = PencilEigenvalues.rateRange(net);
-            fLo = r[0] / (2 * Math.PI);
-            fHi = r[1] / (2 * Math.PI);
+            PencilEigenvalues.RateRange r = PencilEigenvalues.rateRange(net);
+            fLo = r.lowRadPerS() / (2 * Math.PI);
+            fHi = r.highRadPerS() / (2 * Math.PI);
         }
         int nf = Math.min(modes, 12) + 2;
         double[] zm = new double[2];

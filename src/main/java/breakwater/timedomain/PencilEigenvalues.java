@@ -73,8 +73,8 @@ final class PencilEigenvalues {
             e[iV[k]] = b.capacitanceF();
             a[iV[k]][iI[k]] = 1;
         }
-        double[] rates = rateRange(net);
-        double sigma = Math.sqrt(rates[0] * rates[1]);
+        RateRange rates = rateRange(net);
+        double sigma = Math.sqrt(rates.lowRadPerS() * rates.highRadPerS());
         // G = A − σE, LU with partial pivoting
         int[] dyn = new int[n];
         int nd = 0;
@@ -101,7 +101,7 @@ final class PencilEigenvalues {
         double[] wr = new double[nd];
         double[] wi = new double[nd];
         RealEigenvalues.compute(mpp, nd, wr, wi);
-        double maxRate = 1e3 * rates[1];
+        double maxRate = 1e3 * rates.highRadPerS();
         double[] out = new double[2 * nd];
         int c = 0;
         for (int k = 0; k < nd; k++) {
@@ -123,10 +123,19 @@ final class PencilEigenvalues {
     }
 
     /**
+     * A bracket of the natural rates of a network, rad/s.
+     *
+     * @param lowRadPerS  lower end, &gt; 0
+     * @param highRadPerS upper end, &ge; {@code lowRadPerS}
+     */
+    record RateRange(double lowRadPerS, double highRadPerS) {
+    }
+
+    /**
      * Bracket [lo, hi] (rad/s) of the natural rates of the network from its element values:
      * 1/√(LC) over all pairs, R/L and 1/(RC). Used for the shift σ and to recognise infinite eigenvalues.
      */
-    static double[] rateRange(PowerNetwork net) {
+    static RateRange rateRange(PowerNetwork net) {
         double lMin = Double.POSITIVE_INFINITY;
         double lMax = 0;
         double cMin = Double.POSITIVE_INFINITY;
@@ -181,7 +190,7 @@ final class PencilEigenvalues {
         if (!(lo > 0) || !Double.isFinite(lo) || lo > hi) {
             lo = hi;
         }
-        return new double[]{lo, hi};
+        return new RateRange(lo, hi);
     }
 
     /** In-place LU with partial pivoting; returns the row permutation. */

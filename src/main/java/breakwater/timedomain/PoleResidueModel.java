@@ -133,9 +133,9 @@ public final class PoleResidueModel {
             w[k] = pi[k] == 0.0 ? 1.0 : 2.0;
         }
         ModelSelfCheck.requireDecaying(pr, pi, m);
-        double[] asym = highFrequencyLimit(network);
-        return new PoleResidueModel(m, pr, pi, zeros.residueRe(), zeros.residueIm(), w,
-                asym[0], asym[1], asym[2], network.dcResistanceOhms(), degree, ZeroPolisher.structure(network),
+        HighFrequencyLimit asym = highFrequencyLimit(network);
+        return new PoleResidueModel(m, pr, pi, zeros.residueRe(), zeros.residueIm(), w, asym.directOhms(),
+                asym.constantOhms(), asym.seriesInductanceH(), network.dcResistanceOhms(), degree, ZeroPolisher.structure(network),
                 warmStarted);
     }
 
@@ -253,11 +253,21 @@ public final class PoleResidueModel {
     }
 
     /**
-     * High-frequency behaviour {D, D₀, L∞}: D = Z(∞) (+∞ when Y(∞) = 0), D₀ and L∞ of
-     * Z(s) = s·L∞ + D₀ + O(1/s). From the expansions y = 1/(sL) − R/(s²L²) + … of every inductive element
-     * and y → 1/R of every inductance-free one; Y = a/s + b/s² ⇒ Z = s/a − b/a² + O(1/s).
+     * How the load node behaves at high frequency: Z(s) = s·L∞ + D₀ + O(1/s).
+     *
+     * @param directOhms        D = Z(∞); +∞ when Y(∞) = 0 (series inductance at the load node)
+     * @param constantOhms      D₀; equals D when D is finite
+     * @param seriesInductanceH L∞; 0 when D is finite
      */
-    static double[] highFrequencyLimit(PowerNetwork net) {
+    record HighFrequencyLimit(double directOhms, double constantOhms, double seriesInductanceH) {
+    }
+
+    /**
+     * High-frequency behaviour D, D₀ and L∞ of Z(s) = s·L∞ + D₀ + O(1/s), D = Z(∞) (+∞ when Y(∞) = 0). From
+     * the expansions y = 1/(sL) − R/(s²L²) + … of every inductive element and y → 1/R of every
+     * inductance-free one; Y = a/s + b/s² ⇒ Z = s/a − b/a² + O(1/s).
+     */
+    static HighFrequencyLimit highFrequencyLimit(PowerNetwork net) {
         double gB = 0; // Y_b(∞), conductance of inductance-free elements at the board node (may be +∞)
         double aB = 0;
         double bB = 0;
@@ -280,7 +290,8 @@ public final class PoleResidueModel {
         double lB = boardFinite ? 0 : 1 / aB;
         double dB = boardFinite ? zB : -bB * lB * lB;
         if (!net.hasPackage()) {
-            return boardFinite ? new double[]{zB, zB, 0} : new double[]{Double.POSITIVE_INFINITY, dB, lB};
+            return boardFinite ? new HighFrequencyLimit(zB, zB, 0)
+                    : new HighFrequencyLimit(Double.POSITIVE_INFINITY, dB, lB);
         }
         double gL = 0;
         double aL = 0;
@@ -303,10 +314,10 @@ public final class PoleResidueModel {
         }
         if (gL > 0) {
             double d = 1 / gL;
-            return new double[]{d, d, 0};
+            return new HighFrequencyLimit(d, d, 0);
         }
         double l = 1 / aL;
-        return new double[]{Double.POSITIVE_INFINITY, -bL * l * l, l};
+        return new HighFrequencyLimit(Double.POSITIVE_INFINITY, -bL * l * l, l);
     }
 
     private static double sq(double x) {

@@ -202,9 +202,9 @@ public record ResonanceResponse(double frequencyHz, double q, double stepPeakOhm
         double min = Double.POSITIVE_INFINITY;
         for (boolean on : new boolean[]{true, false}) {
             java.util.function.DoubleUnaryOperator f = s -> sq.y(s, on);
-            double[] ext = extremes(f, 0, sq.half, 256);
-            max = Math.max(max, ext[1]);
-            min = Math.min(min, ext[0]);
+            Extremes ext = extremes(f, 0, sq.half, 256);
+            max = Math.max(max, ext.max());
+            min = Math.min(min, ext.min());
         }
         return 0.5 * (max - min);
     }
@@ -214,8 +214,8 @@ public record ResonanceResponse(double frequencyHz, double q, double stepPeakOhm
         double period = 2 * Math.PI / w0;
         for (int cycle = 1; cycle <= maxCycles; cycle++) {
             double t0 = (cycle - 1) * period;
-            double[] ext = extremes(t -> drivenFromRest(model, w0, t), t0, t0 + period, 256);
-            if (0.5 * (ext[1] - ext[0]) >= 0.95 * steady) {
+            Extremes ext = extremes(t -> drivenFromRest(model, w0, t), t0, t0 + period, 256);
+            if (0.5 * (ext.max() - ext.min()) >= 0.95 * steady) {
                 return cycle;
             }
         }
@@ -263,8 +263,17 @@ public record ResonanceResponse(double frequencyHz, double q, double stepPeakOhm
         return v;
     }
 
-    /** {min, max} of f on [a, b]: n + 1 samples, then golden-section refinement around the best ones. */
-    static double[] extremes(java.util.function.DoubleUnaryOperator f, double a, double b, int n) {
+    /**
+     * The smallest and largest value of a function on an interval.
+     *
+     * @param min the smallest value found
+     * @param max the largest value found
+     */
+    record Extremes(double min, double max) {
+    }
+
+    /** Extremes of f on [a, b]: n + 1 samples, then golden-section refinement around the best ones. */
+    static Extremes extremes(java.util.function.DoubleUnaryOperator f, double a, double b, int n) {
         double h = (b - a) / n;
         int iMin = 0;
         int iMax = 0;
@@ -283,7 +292,7 @@ public record ResonanceResponse(double frequencyHz, double q, double stepPeakOhm
         }
         double lo = golden(f, a + Math.max(iMin - 1, 0) * h, a + Math.min(iMin + 1, n) * h, -1);
         double hi = golden(f, a + Math.max(iMax - 1, 0) * h, a + Math.min(iMax + 1, n) * h, 1);
-        return new double[]{Math.min(vMin, lo), Math.max(vMax, hi)};
+        return new Extremes(Math.min(vMin, lo), Math.max(vMax, hi));
     }
 
     /** Golden-section search for the maximum of sign·f on [a, b]; returns f there. */

@@ -52,14 +52,10 @@ public record Waveform(double[] timeS, double[] loadCurrentA, double[] voltageV,
                 || !Double.isFinite(nominalVoltageV) || !Double.isFinite(dcResistanceOhms)) {
             throw new IllegalArgumentException("waveform needs finite ΔI >= 0, I_min, V_nom and Z(0)");
         }
-        double[] tu = samples(model, pattern);
-        int n = tu.length / 2;
-        double[] t = new double[n];
-        double[] u = new double[n];
-        for (int i = 0; i < n; i++) {
-            t[i] = tu[2 * i];
-            u[i] = tu[2 * i + 1];
-        }
+        Samples samples = samples(model, pattern);
+        double[] t = samples.timeS();
+        double[] u = samples.u();
+        int n = t.length;
         double[] y = response(model, t, u);
         double uFar = pattern.value(pattern.size() - 1);
         double base = nominalVoltageV - dcResistanceOhms * minCurrentA - deltaIA * dcResistanceOhms * uFar;
@@ -105,8 +101,17 @@ public record Waveform(double[] timeS, double[] loadCurrentA, double[] voltageV,
         return Arrays.stream(voltageV).max().orElseThrow();
     }
 
-    /** Interleaved (time, u) samples: pattern breakpoints plus fill-in points, then the settle window. */
-    static double[] samples(PoleResidueModel model, LoadPattern p) {
+    /**
+     * Where the waveform is sampled: pattern breakpoints plus fill-in points, then the settle window.
+     *
+     * @param timeS ascending (non-decreasing) times, s
+     * @param u     the normalised load u at each time
+     */
+    record Samples(double[] timeS, double[] u) {
+    }
+
+    /** The samples of the waveform of {@code p} (see {@link Samples}). */
+    static Samples samples(PoleResidueModel model, LoadPattern p) {
         double total = p.lengthS();
         double fast = 0;
         for (int k = 0; k < model.modes; k++) {
@@ -114,12 +119,13 @@ public record Waveform(double[] timeS, double[] loadCurrentA, double[] voltageV,
         }
         double fine = fast > 0 ? 2 * Math.PI / fast / 16 : Math.max(total, 1e-9) / 64;
         double settle = Math.max(0.1 * total, fast > 0 ? 10 / fast : 1e-9);
-        DoubleList out = new DoubleList(4 * p.size() + 256);
+        DoubleList times = new DoubleList(2 * p.size() + 128);
+        DoubleList values = new DoubleList(2 * p.size() + 128);
         int m = p.size();
         double prevT = total - p.lagS(m - 1);
         double prevU = p.value(m - 1);
-        out.add(prevT);
-        out.add(prevU);
+        times.add(prevT);
+        values.add(prevU);
         for (int i = m - 2; i >= 0; i--) {
             double tb = total - p.lagS(i);
             double ub = p.value(i);
@@ -133,13 +139,13 @@ public record Waveform(double[] timeS, double[] loadCurrentA, double[] voltageV,
                     if (next >= tb - 0.25 * step) {
                         break;
                     }
-                    out.add(next);
-                    out.add(ua + (ub - ua) * (next - ta) / (tb - ta));
+                    times.add(next);
+                    values.add(ua + (ub - ua) * (next - ta) / (tb - ta));
                     s = next;
                 }
             }
-            out.add(tb);
-            out.add(ub);
+            times.add(tb);
+            values.add(ub);
             prevT = tb;
             prevU = ub;
         }
@@ -149,10 +155,10 @@ public record Waveform(double[] timeS, double[] loadCurrentA, double[] voltageV,
         while (s < end) {
             double step = Math.max(fine, 0.02 * (s - total));
             s = Math.min(end, s + step);
-            out.add(s);
-            out.add(u0);
+            times.add(s);
+            values.add(u0);
         }
-        return out.toArray();
+        return new Samples(times.toArray(), values.toArray());
     }
 
     /** (h ∗ δu)(t_i) + D₀·δu + L∞·δu' at every sample, δu = u − u(earliest), exact per linear piece. */
