@@ -42,8 +42,56 @@ final class LagGrid {
     /** Quality factor above which the coarse steps shrink (see {@link #COARSEST_FRACTION}). */
     static final double HIGH_Q = 25;
 
-    /** Relative level (of Σ|w r|/|Re p|) below which a mode counts as decayed for the lag grid. */
+    /**
+     * Relative level (of Σ|w r|/|Re p|) below which a mode counts as decayed for the lag grid: the part of
+     * ∫|h| left beyond the grid's end is below this, far inside the 5e-4 accuracy of the result, and each
+     * further decade would cost only ln 10/|Re p| of lag, a few coarse blocks.
+     */
     static final double GRID_TAIL_TOLERANCE = 1e-10;
+
+    /**
+     * Steps per edge time near lag 0: a step of at most t_e/8 puts eight nodes on every full ramp of
+     * slope 1/t_e, so the kinks of the optimum are placed to within t_e/8; the discretisation gap falls
+     * with the square of the step ({@code EdgeLimitedWorstCaseTest.gridRefinementAndIdealLimit}: halving
+     * every step gains less than 3e-4).
+     */
+    static final int STEPS_PER_EDGE = 8;
+
+    /**
+     * The fine region lasts at least this many periods of the fastest mode: by then a mode of
+     * Q = {@value #HIGH_Q} has rung down to e^{−π·24/25} ≈ 5 % of its amplitude; longer ringing is left
+     * to the coarse steps, whose size each live mode limits.
+     */
+    static final int FINE_PERIODS = 24;
+
+    /**
+     * The fine region lasts at least this many edge times, so that when t_e is long against the fastest
+     * period the first ramps before the worst instant, which weigh most, are still on the fine step.
+     */
+    static final int FINE_EDGE_TIMES = 16;
+
+    /**
+     * Steps per block beyond the fine region; each block may double the step once, so every decade of
+     * lag beyond it costs about 16/log10(2) ≈ 53 nodes: gentle growth, and a grid that spans the eight
+     * decades between the fastest and slowest modes in well under a thousand coarse nodes.
+     */
+    static final int STEPS_PER_BLOCK = 16;
+
+    /**
+     * The coarse step of a high-Q mode shrinks by Q/{@value #HIGH_Q} at most this many times, which
+     * at Q = 100 makes it 1/192 of the period, as fine as the finest step; the bound keeps the grid from
+     * growing without limit with Q ({@code EdgeLimitedWorstCaseTest
+     * .highQResonanceWithAShortEdgeApproachesTheIdealLimit}: Q from 20 to 200 within 5e-4 of the ideal-edge
+     * limit).
+     */
+    static final int MAX_HIGH_Q_SHRINK = 4;
+
+    /**
+     * With series inductance at the load node the grid starts with this many steps of t_e/8 (two edge
+     * times), so that τ₁ ≤ t_e and the term L∞·(u₀ − u₁)/(τ₁ − τ₀) can reach L∞/t_e
+     * ({@code EdgeLimitedWorstCaseTest.seriesRlLoadNodeGivesRPlusLOverTe}: R + L/t_e exactly).
+     */
+    static final int INDUCTIVE_START_STEPS = 16;
 
     /** Step of each run. */
     double[] runStep = new double[16];
@@ -72,7 +120,7 @@ final class LagGrid {
         int nm = m.modes;
         clear(nm);
         if (nm == 0) {
-            add(edgeTimeS / 8, 1);
+            add(edgeTimeS / STEPS_PER_EDGE, 1);
             return;
         }
         double[] period = this.period;
@@ -88,21 +136,21 @@ final class LagGrid {
             double b0 = m.weight[k] * Math.hypot(m.rr[k], m.ri[k]) / -m.pr[k];
             period[k] = 2 * Math.PI / Math.hypot(m.pr[k], m.pi[k]);
             double q = Math.hypot(m.pr[k], m.pi[k]) / (-2 * m.pr[k]);
-            capStep[k] = period[k] / (COARSEST_FRACTION * Math.min(Math.max(q / HIGH_Q, 1), 4));
+            capStep[k] = period[k] / (COARSEST_FRACTION * Math.min(Math.max(q / HIGH_Q, 1), MAX_HIGH_Q_SHRINK));
             double ratio = b0 / (GRID_TAIL_TOLERANCE * total);
             dead[k] = ratio > 1 ? Math.log(ratio) / -m.pr[k] : 0;
             end = Math.max(end, dead[k]);
             tMin = Math.min(tMin, period[k]);
         }
-        double step = Math.max(Math.min(edgeTimeS / 8, tMin / COARSEST_FRACTION), tMin / FINEST_FRACTION);
-        double fineEnd = Math.min(Math.max(24 * tMin, 16 * edgeTimeS), Math.max(end, step));
+        double step = Math.max(Math.min(edgeTimeS / STEPS_PER_EDGE, tMin / COARSEST_FRACTION), tMin / FINEST_FRACTION);
+        double fineEnd = Math.min(Math.max(FINE_PERIODS * tMin, FINE_EDGE_TIMES * edgeTimeS), Math.max(end, step));
         double tau = 0;
-        if (m.seriesInductanceH() > 0 && edgeTimeS / 8 < step) {
+        if (m.seriesInductanceH() > 0 && edgeTimeS / STEPS_PER_EDGE < step) {
             // the series-inductance term L·(u₀ − u₁)/(τ₁ − τ₀) reaches L/t_e only with τ₁ ≤ t_e
-            for (int i = 0; i < 16; i++) {
-                tau += edgeTimeS / 8;
+            for (int i = 0; i < INDUCTIVE_START_STEPS; i++) {
+                tau += edgeTimeS / STEPS_PER_EDGE;
             }
-            add(edgeTimeS / 8, 16);
+            add(edgeTimeS / STEPS_PER_EDGE, INDUCTIVE_START_STEPS);
         }
         // tau accumulates step by step: the loop decisions (and so the grid) are those of a running sum
         int q = 0;
@@ -122,7 +170,7 @@ final class LagGrid {
                 step *= 2;
             }
             q = 0;
-            for (int i = 0; i < 16 && tau < end; i++) {
+            for (int i = 0; i < STEPS_PER_BLOCK && tau < end; i++) {
                 tau += step;
                 q++;
             }

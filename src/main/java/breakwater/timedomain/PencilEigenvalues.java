@@ -21,6 +21,22 @@ import java.util.List;
  */
 final class PencilEigenvalues {
 
+    /**
+     * An eigenvalue more than this many times the top of the network's rate bracket ({@link #rateRange}) is
+     * an infinite eigenvalue of the pencil (μ at rounding level, so 1/μ some ten decades above any natural
+     * rate) and is dropped. The bracket's top is already an upper estimate of the fastest natural rate, so
+     * a factor of 1e3 keeps every finite one with room to spare while staying many decades below the
+     * infinite ones; a spurious guess that got through would only cost a failed Newton run.
+     */
+    private static final double INFINITE_EIGENVALUE_FACTOR = 1e3;
+
+    /**
+     * Rate (rad/s, about 160 MHz) used as the bracket when the element values define none (no inductance
+     * and capacitance, resistance and inductance or resistance and capacitance to pair): then the network
+     * has no modes, and the value only places the shift σ and the self-check's frequencies.
+     */
+    private static final double FALLBACK_RATE_RAD_PER_S = 1e9;
+
     private PencilEigenvalues() {
     }
 
@@ -101,7 +117,7 @@ final class PencilEigenvalues {
         double[] wr = new double[nd];
         double[] wi = new double[nd];
         RealEigenvalues.compute(mpp, nd, wr, wi);
-        double maxRate = 1e3 * rates.highRadPerS();
+        double maxRate = INFINITE_EIGENVALUE_FACTOR * rates.highRadPerS();
         double[] out = new double[2 * nd];
         int c = 0;
         for (int k = 0; k < nd; k++) {
@@ -185,7 +201,7 @@ final class PencilEigenvalues {
             lo = Math.min(lo, 1 / (rMax * cSum));
         }
         if (!(hi > 0) || !Double.isFinite(hi)) {
-            hi = 1e9;
+            hi = FALLBACK_RATE_RAD_PER_S;
         }
         if (!(lo > 0) || !Double.isFinite(lo) || lo > hi) {
             lo = hi;

@@ -17,8 +17,30 @@ import java.util.Locale;
  */
 public final class WorstCaseAnalyzer {
 
-    /** Tail bound for the ideal-edge march, relative to the accumulated ∫|h|. */
+    /**
+     * The ideal-edge march stops when the tail bound of h is below this fraction of the ∫|h| accumulated:
+     * the figures are then exact to 1e-10 relative, far beyond what a design needs, and a decade more costs only
+     * ln 10/|Re p| of march on the slowest mode.
+     */
     static final double IDEAL_TAIL_TOLERANCE = 1e-10;
+
+    /**
+     * Tolerance of the identity droop − overshoot = Z(0), relative to droop + overshoot: a sum of many
+     * sign intervals, each exact to about 1e-13 of S plus the 1e-10 tail, so 1e-7 fails only a real
+     * error in the march or the model ({@code IdealEdgeWorstCaseTest.droopMinusOvershootIsDcResistance}
+     * holds it to 1e-9).
+     */
+    private static final double IDENTITY_TOLERANCE = 1e-7;
+
+    /** Absolute floor of the identity check, Ω: for a network whose figures are all zero. */
+    private static final double IDENTITY_FLOOR_OHMS = 1e-15;
+
+    /**
+     * The pattern recovered by the forward pass must give the dynamic program's optimum to this fraction
+     * of Σ|w|: two exact evaluations of one optimum that differ only in rounding; a larger gap means a
+     * recovery error, and the pattern would not reach the figure reported.
+     */
+    private static final double RECOVERY_TOLERANCE = 1e-9;
 
     private WorstCaseAnalyzer() {
     }
@@ -52,7 +74,7 @@ public final class WorstCaseAnalyzer {
         double droop = sink.positive + Math.max(d, 0);
         double overshoot = sink.negative + Math.max(-d, 0);
         double z0 = model.dcResistanceOhms();
-        if (!(Math.abs(droop - overshoot - z0) <= 1e-7 * (droop + overshoot) + 1e-15)) {
+        if (!(Math.abs(droop - overshoot - z0) <= IDENTITY_TOLERANCE * (droop + overshoot) + IDENTITY_FLOOR_OHMS)) {
             throw new ModelException(String.format(Locale.ROOT,
                     "worst-case integration fails the identity droop - overshoot = Z(0): %.12g - %.12g vs %.12g",
                     droop, overshoot, z0));
@@ -178,7 +200,7 @@ public final class WorstCaseAnalyzer {
 
     /**
      * Throws unless the pattern {@code u} recovered by the forward pass gives the dynamic program's
-     * optimum {@code value} on the weights sign·w, to 1e-9 of Σ|w|.
+     * optimum {@code value} on the weights sign·w, to {@value #RECOVERY_TOLERANCE} of Σ|w|.
      */
     private static void checkRecovered(double[] w, double sign, int n, double[] u, double value, String what) {
         double sum = 0;
@@ -187,7 +209,7 @@ public final class WorstCaseAnalyzer {
             sum += sign * w[k] * u[k];
             scale += Math.abs(w[k]);
         }
-        if (!(Math.abs(sum - value) <= 1e-9 * scale)) {
+        if (!(Math.abs(sum - value) <= RECOVERY_TOLERANCE * scale)) {
             throw new ModelException(String.format(Locale.ROOT,
                     "edge-limited %s: the recovered pattern gives %.12g, the dynamic program %.12g", what, sum, value));
         }

@@ -25,6 +25,59 @@ import java.util.Optional;
  */
 final class ZeroPolisher {
 
+    /**
+     * Iteration cap of Newton's method, plain and deflated. From a pencil eigenvalue the quadratic phase
+     * takes a handful of steps; the cap leaves room for a slow start from a neighbour's pole, and a guess
+     * still moving after it is taken as no zero of Y (a mode the load cannot see: the constant-resistance
+     * network of {@code PoleResidueModelTest} relies on such guesses being dropped).
+     */
+    private static final int MAX_ITERATIONS = 60;
+
+    /**
+     * Newton stops when the step is below this fraction of |s|: some fifty ulps, where the steps are
+     * rounding noise. Smaller might never be reached; larger would stop short of full precision, which the
+     * warm start needs to reproduce the cold model ({@code WarmStartTest}, poles equal to 1e-9).
+     */
+    private static final double STEP_TOLERANCE = 1e-14;
+
+    /**
+     * Newton also stops when |Y| is below this fraction of the scale Σ|y_i| of the terms summed into it:
+     * Y is then zero to rounding and the next step would be noise.
+     */
+    private static final double VANISHED_RESIDUAL = 1e-15;
+
+    /**
+     * A converged point is accepted as a zero of Y only if |Y| there is below this fraction of the scale
+     * of its terms. A true zero leaves |Y| at rounding level, many decades lower; a point where Newton only
+     * stalled (a pole–zero cancellation of a hidden mode) leaves far more, so the margin is wide both ways
+     * ({@code PoleResidueModelTest.constantResistanceNetworkIsExactlyResistive},
+     * {@code WarmStartTest.aHintWithAHiddenModeIsNotUsed}).
+     */
+    private static final double ACCEPTED_RESIDUAL = 1e-9;
+
+    /**
+     * A zero whose imaginary part is below this fraction of |s| is real: Newton reached a real zero from a
+     * complex guess and left a rounding-level imaginary part. It is polished again on the real axis and
+     * stored once (weight 1); a genuine pair this close to the axis (damping within 1e-9 of critical)
+     * cannot be told from a double real pole in double precision anyway.
+     */
+    private static final double REAL_AXIS_TOLERANCE = 1e-9;
+
+    /**
+     * Two zeros closer than this fraction of |s| are the same zero found from two guesses (two polishings
+     * of one zero agree to rounding, far closer); the second guess counts as having found none. Distinct
+     * zeros this close would be too ill-conditioned to separate; a zero missed that way is caught by the
+     * self-checks ({@link ModelSelfCheck}).
+     */
+    private static final double DUPLICATE_TOLERANCE = 1e-7;
+
+    /**
+     * The deflated iteration stops when its step is below this fraction of |s|: it only has to land
+     * near a new zero, which plain Newton then polishes to full precision; the deflation sum over the zeros
+     * found adds rounding, so it is held looser than {@link #STEP_TOLERANCE}.
+     */
+    private static final double DEFLATED_STEP_TOLERANCE = 1e-10;
+
     private ZeroPolisher() {
     }
 
@@ -116,7 +169,7 @@ final class ZeroPolisher {
                 }
                 double qr = root[0];
                 double qi = root[1];
-                if (Math.abs(qi) <= 1e-9 * Math.hypot(qr, qi)) {
+                if (Math.abs(qi) <= REAL_AXIS_TOLERANCE * Math.hypot(qr, qi)) {
                     if (!newton(ladder, qr, 0.0, root)) {
                         if (pass == 0) {
                             missed[nm++] = c; // tried again once, in the second pass
@@ -130,7 +183,7 @@ final class ZeroPolisher {
                 }
                 boolean duplicate = false;
                 for (int k = 0; k < m; k++) {
-                    if (Math.hypot(pr[k] - qr, pi[k] - qi) <= 1e-7 * Math.hypot(qr, qi)) {
+                    if (Math.hypot(pr[k] - qr, pi[k] - qi) <= DUPLICATE_TOLERANCE * Math.hypot(qr, qi)) {
                         duplicate = true;
                         break;
                     }
@@ -166,12 +219,13 @@ final class ZeroPolisher {
 
     /**
      * Newton's method on Y(s) = 0 from (sr, si), quadratically convergent at a simple zero. Succeeds when
-     * the step falls below 1e-14·|s| (or Y vanishes to 1e-15 of the scale of its terms) and the final
-     * |Y| is below 1e-9 of that scale; the root goes to {@code out}.
+     * the step falls below {@value #STEP_TOLERANCE}·|s| (or Y vanishes to {@value #VANISHED_RESIDUAL} of
+     * the scale of its terms) and the final |Y| is below {@value #ACCEPTED_RESIDUAL} of that scale; the root
+     * goes to {@code out}.
      */
     static boolean newton(Ladder ladder, double sr, double si, double[] out) {
         boolean stepConverged = false;
-        for (int it = 0; it < 60; it++) {
+        for (int it = 0; it < MAX_ITERATIONS; it++) {
             ladder.eval(sr, si);
             double yr = ladder.yr;
             double yi = ladder.yi;
@@ -181,7 +235,7 @@ final class ZeroPolisher {
             if (!(dm > 0) || !Double.isFinite(dm) || !Double.isFinite(yr) || !Double.isFinite(yi)) {
                 return false;
             }
-            if (Math.abs(yr) + Math.abs(yi) <= 1e-15 * ladder.scale) {
+            if (Math.abs(yr) + Math.abs(yi) <= VANISHED_RESIDUAL * ladder.scale) {
                 stepConverged = true;
                 break;
             }
@@ -190,7 +244,7 @@ final class ZeroPolisher {
             double xi = (yi * dr - yr * di) / dm;
             sr -= xr;
             si -= xi;
-            if (Math.hypot(xr, xi) <= 1e-14 * Math.hypot(sr, si)) {
+            if (Math.hypot(xr, xi) <= STEP_TOLERANCE * Math.hypot(sr, si)) {
                 stepConverged = true;
                 break;
             }
@@ -199,7 +253,7 @@ final class ZeroPolisher {
             return false;
         }
         ladder.eval(sr, si);
-        if (!(Math.abs(ladder.yr) + Math.abs(ladder.yi) <= 1e-9 * ladder.scale)) {
+        if (!(Math.abs(ladder.yr) + Math.abs(ladder.yi) <= ACCEPTED_RESIDUAL * ladder.scale)) {
             return false;
         }
         out[0] = sr;
@@ -210,11 +264,12 @@ final class ZeroPolisher {
     /**
      * Newton's method on Y(s)/Π(s − z_k) over the zeros z_k found so far and their conjugates: the step
      * Y/(Y' − Y·Σ 1/(s − z_k)) (Maehly's correction) keeps it away from them. Succeeds when the step falls
-     * below 1e-10·|s|, leaving the point (to be polished on Y itself) in {@code out}.
+     * below {@value #DEFLATED_STEP_TOLERANCE}·|s|, leaving the point (to be polished on Y itself) in
+     * {@code out}; a point within {@value #REAL_AXIS_TOLERANCE}·|s| of the real axis is put on it.
      */
     static boolean deflatedNewton(Ladder ladder, double sr, double si, double[] zr, double[] zi, int m,
                                   double[] out) {
-        for (int it = 0; it < 60; it++) {
+        for (int it = 0; it < MAX_ITERATIONS; it++) {
             ladder.eval(sr, si);
             double yr = ladder.yr;
             double yi = ladder.yi;
@@ -246,9 +301,9 @@ final class ZeroPolisher {
             double xi = (yi * dr - yr * di) / dm;
             sr -= xr;
             si -= xi;
-            if (Math.hypot(xr, xi) <= 1e-10 * Math.hypot(sr, si)) {
+            if (Math.hypot(xr, xi) <= DEFLATED_STEP_TOLERANCE * Math.hypot(sr, si)) {
                 out[0] = sr;
-                out[1] = Math.abs(si) <= 1e-9 * Math.hypot(sr, si) ? 0.0 : si;
+                out[1] = Math.abs(si) <= REAL_AXIS_TOLERANCE * Math.hypot(sr, si) ? 0.0 : si;
                 return true;
             }
         }
