@@ -21,7 +21,7 @@ final class HatWeights {
      * Nodes per block of the weight computation: powers e^{pmΔ}, m &le; BLOCK, are tabulated per run. A
      * speed setting, not an accuracy one: larger blocks amortise more of the per-block work but the tables
      * (4·BLOCK doubles per mode) leave the cache sooner; the rounding of the tabulated powers stays within
-     * the measured 4e-13 of Σ|w| ({@code WorstCasePerAmpereTest.blockWeightsEqualTheLagByLagSum}).
+     * the measured 4e-13 of Σ|w| ({@code HatWeightsTest.blockWeightsEqualTheLagByLagSum}).
      */
     private static final int BLOCK = 128;
 

@@ -13,7 +13,7 @@ package breakwater.timedomain;
  * <p>Error: the chain LP on this grid is exact for the piecewise-linear loads with kinks on its nodes,
  * so its optimum is a lower bound of the continuous one; it trails it by the cost of placing the
  * optimum's kinks on grid nodes, which falls with the square of the step. Measured below 5e-4 relative
- * (halving every step gains at most 1.2e-4 on a realistic network; see {@code EdgeLimitedWorstCaseTest}).
+ * (halving every step gains at most 1.2e-4 on a realistic network; see {@code LagGridTest}).
  * Beyond the grid's end the load holds its last value, and the tail beyond it is at most
  * {@link #GRID_TAIL_TOLERANCE} of Σ|w r|/|Re p|.
  *
@@ -52,7 +52,7 @@ final class LagGrid {
     /**
      * Steps per edge time near lag 0: a step of at most t_e/8 puts eight nodes on every full ramp of
      * slope 1/t_e, so the kinks of the optimum are placed to within t_e/8; the discretisation gap falls
-     * with the square of the step ({@code EdgeLimitedWorstCaseTest.gridRefinementAndIdealLimit}: halving
+     * with the square of the step ({@code LagGridTest.gridRefinementAndIdealLimit}: halving
      * every step gains less than 3e-4).
      */
     static final int STEPS_PER_EDGE = 8;
