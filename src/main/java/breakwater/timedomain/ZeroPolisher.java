@@ -28,8 +28,8 @@ final class ZeroPolisher {
     /**
      * Iteration cap of Newton's method, plain and deflated. From a pencil eigenvalue the quadratic phase
      * takes a handful of steps; the cap leaves room for a slow start from a neighbour's pole, and a guess
-     * still moving after it is taken as no zero of Y (a mode the load cannot see: the constant-resistance
-     * network of {@code PoleResidueModelTest} relies on such guesses being dropped).
+     * still moving after it is taken as having found no zero of Y (as for a mode the load cannot see,
+     * whose guess has no zero to converge to).
      */
     private static final int MAX_ITERATIONS = 60;
 
