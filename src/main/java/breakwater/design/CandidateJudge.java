@@ -185,7 +185,7 @@ public final class CandidateJudge {
         double[] fHz = engine.grid().frequenciesHz();
         for (int k : new int[] {at, second}) {
             if (refine && k > 0 && k < mag.length - 1) {
-                peak = Math.max(peak, ImpedanceAnalysis.refineExtremum(network::magnitude, fHz[k - 1], fHz[k + 1], true)[1]);
+                peak = Math.max(peak, ImpedanceAnalysis.refineExtremum(network::magnitude, fHz[k - 1], fHz[k + 1], true).magnitudeOhms());
             }
         }
         double targetExcess = s.requireTarget() ? Math.max(0, peak * (1 + TARGET_GUARD) / target - 1) : 0;

@@ -8,8 +8,22 @@ import breakwater.scenario.Band;
  */
 public record FrequencyGrid(double[] frequenciesHz) {
 
-    /** Default density for reports and checks (DESIGN.md: 200 points per decade). */
+    /**
+     * Default density for reports and checks (DESIGN.md: 200 points per decade): steps of 1.16 % in
+     * frequency, so every anti-resonance of Q up to about 40 (half-power width f0/Q) spans at least two
+     * points and is seen as a local maximum; its exact peak is then refined against the network
+     * ({@link ImpedanceAnalysis}).
+     */
     public static final int DEFAULT_POINTS_PER_DECADE = 200;
+
+    /**
+     * Slack on the number of steps, in steps: a band whose decades × density is a whole number, but comes
+     * out a hair above it in floating point, gets no extra point.
+     */
+    private static final double COUNT_ROUNDING = 1e-9;
+
+    /** {@link #aroundBand} widens the band by this factor at each end (one decade). */
+    private static final double BAND_WIDENING = 10.0;
 
     public FrequencyGrid {
         if (frequenciesHz.length < 2) {
@@ -31,7 +45,7 @@ public record FrequencyGrid(double[] frequenciesHz) {
             throw new IllegalArgumentException("need 0 < from < to and pointsPerDecade >= 1");
         }
         double decades = Math.log10(toHz / fromHz);
-        int n = (int) Math.ceil(decades * pointsPerDecade - 1e-9) + 1;
+        int n = (int) Math.ceil(decades * pointsPerDecade - COUNT_ROUNDING) + 1;
         n = Math.max(n, 2);
         double[] f = new double[n];
         for (int k = 0; k < n - 1; k++) {
@@ -49,7 +63,7 @@ public record FrequencyGrid(double[] frequenciesHz) {
 
     /** The band widened by one decade each side, at {@code pointsPerDecade}. */
     public static FrequencyGrid aroundBand(Band band, int pointsPerDecade) {
-        return logarithmic(band.fromHz() / 10.0, band.toHz() * 10.0, pointsPerDecade);
+        return logarithmic(band.fromHz() / BAND_WIDENING, band.toHz() * BAND_WIDENING, pointsPerDecade);
     }
 
     public int size() {

@@ -33,6 +33,36 @@ public final class ImpedanceAnalysis {
      */
     public static final double MIN_PROMINENCE = 1e-3;
 
+    /**
+     * Relative tolerance of Brent's method on ln f: locates an extremum to 1e-10 of ln f (a few 1e-9 in
+     * frequency), far inside the 0.1 % required ({@code ImpedanceAnalysisTest.refinedPeakFrequencyIsBetterThanATenthOfAPercent});
+     * a peak's value, flat there, is then exact to rounding.
+     */
+    private static final double BRENT_RELATIVE_TOLERANCE = 1e-10;
+
+    /** Absolute tolerance of Brent's method on ln f (matters only near 1 Hz, where ln f = 0). */
+    private static final double BRENT_ABSOLUTE_TOLERANCE = 1e-14;
+
+    /**
+     * Evaluation cap of one Brent search on one grid interval, which usually needs a few dozen: the cap
+     * only stops a runaway (Commons Math then throws, which ends the run as a bug, never as a figure).
+     */
+    private static final int BRENT_MAX_EVALUATIONS = 200;
+
+    /**
+     * Step δ in ln f of the first curvature estimate of Q, whose result sets the second step: small
+     * against the peak width 1/Q of moderate resonances, large enough that |Z| changes well above
+     * rounding.
+     */
+    private static final double CURVATURE_STEP = 1e-3;
+
+    /**
+     * Second pass: δ = min(1e-3, this/Q), a small fraction of the peak's half-power width 1/Q in ln f,
+     * where the parabola |Z| ≈ Z_p·(1 − 2Q²δ²) holds: the next term makes the estimate of Q² wrong by
+     * about (Qδ)² ≤ 4e-4 ({@code ImpedanceAnalysisTest.singleTankPeakMatchesHandbookApproximations}).
+     */
+    private static final double CURVATURE_STEP_PER_Q = 0.02;
+
     private ImpedanceAnalysis() {
     }
 
@@ -83,9 +113,9 @@ public final class ImpedanceAnalysis {
                 }
                 continue;
             }
-            double[] refined = refine(mag, f[i - 1], f[i + 1], localMax ? GoalType.MAXIMIZE : GoalType.MINIMIZE);
-            double fr = refined[0];
-            double zr = refined[1];
+            Extremum refined = refine(mag, f[i - 1], f[i + 1], localMax ? GoalType.MAXIMIZE : GoalType.MINIMIZE);
+            double fr = refined.frequencyHz();
+            double zr = refined.magnitudeOhms();
             if (!band.contains(fr)) {
                 continue;
             }
@@ -123,32 +153,38 @@ public final class ImpedanceAnalysis {
         return peak - Math.max(leftLow, rightLow);
     }
 
-    /** Brent search on ln f in [lo, hi]; returns {f, |Z|(f)}. */
-    static double[] refine(DoubleUnaryOperator mag, double loHz, double hiHz, GoalType goal) {
+    /**
+     * A refined extremum of |Z|.
+     *
+     * @param frequencyHz   where it lies
+     * @param magnitudeOhms |Z| there
+     */
+    public record Extremum(double frequencyHz, double magnitudeOhms) {
+    }
+
+    /** Brent search on ln f in [lo, hi]. */
+    static Extremum refine(DoubleUnaryOperator mag, double loHz, double hiHz, GoalType goal) {
         return refineExtremum(mag, loHz, hiHz, goal == GoalType.MAXIMIZE);
     }
 
-    /**
-     * Brent search for the maximum (or minimum) of |Z| on ln f in [lo, hi], as the full analysis does;
-     * returns {f, |Z|(f)}.
-     */
-    public static double[] refineExtremum(DoubleUnaryOperator mag, double loHz, double hiHz, boolean maximum) {
+    /** Brent search for the maximum (or minimum) of |Z| on ln f in [lo, hi], as the full analysis does. */
+    public static Extremum refineExtremum(DoubleUnaryOperator mag, double loHz, double hiHz, boolean maximum) {
         GoalType goal = maximum ? GoalType.MAXIMIZE : GoalType.MINIMIZE;
-        BrentOptimizer brent = new BrentOptimizer(1e-10, 1e-14);
+        BrentOptimizer brent = new BrentOptimizer(BRENT_RELATIVE_TOLERANCE, BRENT_ABSOLUTE_TOLERANCE);
         double a = Math.log(loHz);
         double b = Math.log(hiHz);
-        UnivariatePointValuePair best = brent.optimize(new MaxEval(200),
+        UnivariatePointValuePair best = brent.optimize(new MaxEval(BRENT_MAX_EVALUATIONS),
                 new UnivariateObjectiveFunction(x -> mag.applyAsDouble(Math.exp(x))), goal,
                 new SearchInterval(a, b, 0.5 * (a + b)));
         double fr = Math.exp(best.getPoint());
-        return new double[] {fr, best.getValue()};
+        return new Extremum(fr, best.getValue());
     }
 
     /** Q from the curvature of |Z| at a peak (see class Javadoc); two passes to pick a step suited to Q. */
     static double curvatureQ(DoubleUnaryOperator mag, double f0, double z0) {
-        double q = curvatureQ(mag, f0, z0, 1e-3);
+        double q = curvatureQ(mag, f0, z0, CURVATURE_STEP);
         if (q > 0 && Double.isFinite(q)) {
-            double step = Math.min(1e-3, 0.02 / q);
+            double step = Math.min(CURVATURE_STEP, CURVATURE_STEP_PER_Q / q);
             q = curvatureQ(mag, f0, z0, step);
         }
         return q;

@@ -14,6 +14,12 @@ import java.util.Objects;
  */
 public record SeriesBranch(String label, double resistanceOhms, double inductanceH, double capacitanceF) {
 
+    /**
+     * |Z|² of a branch is clamped to at least this, Ω²: only a lossless branch exactly at resonance gets
+     * there, and the admittance is then huge but finite instead of a division by zero.
+     */
+    private static final double MIN_MAGNITUDE_SQUARED = 1e-300;
+
     public SeriesBranch {
         Objects.requireNonNull(label, "label");
         if (!(resistanceOhms >= 0) || !Double.isFinite(resistanceOhms)) {
@@ -49,8 +55,8 @@ public record SeriesBranch(String label, double resistanceOhms, double inductanc
         double x = omega * inductanceH - 1.0 / (omega * capacitanceF);
         double r = resistanceOhms;
         double mag2 = r * r + x * x;
-        if (mag2 < 1e-300) {
-            mag2 = 1e-300;
+        if (mag2 < MIN_MAGNITUDE_SQUARED) {
+            mag2 = MIN_MAGNITUDE_SQUARED;
         }
         out[0] = r / mag2;
         out[1] = -x / mag2;

@@ -28,11 +28,64 @@ final class ImpulseMarch {
         void interval(double startS, double endS, double integral, boolean positive);
     }
 
+    /**
+     * A mode is dropped once its tail bound |w r| e^{Re(p) t}/|Re p| falls below this fraction of
+     * S = Σ|w r|/|Re p|: the level of the march's own rounding per interval (about 1e-13·S), so what is
+     * dropped is lost in that rounding, and each dead mode stops costing time.
+     */
     private static final double DROP = 1e-13;
-    /** Steps between checks of the tail bound (dropping dead modes, stopping). */
+    /**
+     * Steps between checks of the tail bound (dropping dead modes, stopping): a check loops over the modes
+     * as a step does, and the march stops at most this many steps later than it could.
+     */
     private static final int CHECK_EVERY = 16;
     /** Long steps of 2, 4, 8, 16 base steps where h provably keeps its sign. */
     private static final int LEVELS = 5;
+
+    /**
+     * The base step is π/(4|p|) of the fastest live mode, 1/8 of its period: the step that the crossing
+     * refinement's error bound (class comment) and the dip test are stated for. A longer step weakens the
+     * Hermite bound of the dip test with Δ⁴; a shorter one only costs time.
+     */
+    private static final int STEPS_PER_HALF_PERIOD = 4;
+
+    /**
+     * Safety factor on the cubic Hermite remainder max|h⁗|·Δ⁴/384 in the dip test: a dip whose cubic
+     * comes within twice that bound of zero is evaluated exactly, so a shallow double crossing inside one
+     * step is not missed through the bound being tight.
+     */
+    private static final int DIP_MARGIN = 2;
+
+    /**
+     * Iteration cap of the crossing refinement: each iteration at least halves the bracket (bisection is
+     * the fallback), and 40 halvings take it from one step to below 1e-12 of a step; usually one or two
+     * Taylor steps end it.
+     */
+    private static final int REFINE_MAX_ITERATIONS = 40;
+
+    /**
+     * The second-order Taylor step ends the refinement once the correction ε is at most this fraction of
+     * the step: H is then known at the crossing to its ε⁴ remainder, below 2e-14·S (class comment).
+     */
+    private static final double TAYLOR_STEP_FRACTION = 1e-3;
+
+    /**
+     * The refinement also ends when the bracket is below this fraction of the time (or of the step):
+     * a few ulps, where the crossing time cannot be resolved further.
+     */
+    private static final double BRACKET_TOLERANCE = 1e-15;
+
+    /** Iteration cap of the root search on the cubic Hermite interpolant (safeguarded Newton). */
+    private static final int HERMITE_ROOT_MAX_ITERATIONS = 30;
+
+    /**
+     * The root of the cubic, in units of the step, is good enough to this: it is only the first guess of
+     * the exact refinement, which needs it within {@link #TAYLOR_STEP_FRACTION} of the step.
+     */
+    private static final double HERMITE_ROOT_TOLERANCE = 1e-9;
+
+    /** Bisections for the cubic's extremum: 2⁻⁶⁰ of a step, beyond double precision. */
+    private static final int EXTREMUM_BISECTIONS = 60;
 
     private final PoleResidueModel model;
     private final int n;
@@ -177,7 +230,7 @@ final class ImpulseMarch {
                 double speed = Math.hypot(pr[0], pi[0]);
                 if (speed != fastest) {
                     fastest = speed;
-                    dt = Math.PI / (4 * speed);
+                    dt = Math.PI / (STEPS_PER_HALF_PERIOD * speed);
                     for (int k = 0; k < na; k++) {
                         double e = Math.exp(pr[k] * dt);
                         double a = e * Math.cos(pi[k] * dt);
@@ -238,7 +291,7 @@ final class ImpulseMarch {
                 for (int k = 0; k < na; k++) {
                     m4 += bound[k] * c4[k];
                 }
-                double margin = 2 * m4 * dt * dt * dt * dt / 384;
+                double margin = DIP_MARGIN * m4 * dt * dt * dt * dt / 384;
                 double cubic = hermiteValue(ha, hpa * dt, h, hp * dt, theta);
                 if (theta > 0 && theta < 1 && (positive ? cubic < margin : cubic > -margin)) {
                     double tm = ta + theta * dt;
@@ -311,7 +364,7 @@ final class ImpulseMarch {
         double a = lo;
         double b = hi;
         boolean loPositive = hlo > 0;
-        for (int it = 0; it < 40; it++) {
+        for (int it = 0; it < REFINE_MAX_ITERATIONS; it++) {
             evalAt(guess - tb);
             double h = xh;
             double hp = xhp;
@@ -334,7 +387,7 @@ final class ImpulseMarch {
                     eps = -h / den;
                 }
             }
-            if (hp != 0 && Math.abs(eps) <= 1e-3 * span && guess + eps >= lo && guess + eps <= hi) {
+            if (hp != 0 && Math.abs(eps) <= TAYLOR_STEP_FRACTION * span && guess + eps >= lo && guess + eps <= hi) {
                 rootT = guess + eps;
                 rootH = xH + eps * (h + eps * (0.5 * hp + eps * hpp / 6.0));
                 return;
@@ -343,7 +396,7 @@ final class ImpulseMarch {
             if (!(next > a && next < b)) {
                 next = 0.5 * (a + b);
             }
-            if (b - a <= 1e-15 * Math.max(Math.abs(a), span)) {
+            if (b - a <= BRACKET_TOLERANCE * Math.max(Math.abs(a), span)) {
                 rootT = next;
                 evalAt(next - tb);
                 rootH = xH;
@@ -368,7 +421,7 @@ final class ImpulseMarch {
             x = 0.5;
         }
         boolean loPos = f0 > 0;
-        for (int it = 0; it < 30; it++) {
+        for (int it = 0; it < HERMITE_ROOT_MAX_ITERATIONS; it++) {
             double x2 = x * x;
             double x3 = x2 * x;
             double h00 = 2 * x3 - 3 * x2 + 1;
@@ -387,7 +440,7 @@ final class ImpulseMarch {
             if (!(next > lo && next < hi)) {
                 next = 0.5 * (lo + hi);
             }
-            if (Math.abs(next - x) < 1e-9) {
+            if (Math.abs(next - x) < HERMITE_ROOT_TOLERANCE) {
                 return next;
             }
             x = next;
@@ -415,7 +468,7 @@ final class ImpulseMarch {
         double lo = 0;
         double hi = 1;
         boolean loPos = c > 0;
-        for (int it = 0; it < 60; it++) {
+        for (int it = 0; it < EXTREMUM_BISECTIONS; it++) {
             double x = 0.5 * (lo + hi);
             double v = (a * x + b) * x + c;
             if ((v > 0) == loPos) {

@@ -11,7 +11,36 @@ package breakwater.timedomain;
  */
 final class RealEigenvalues {
 
+    /**
+     * QR iterations allowed for one eigenvalue (or pair) to split off before the search gives up with a
+     * {@link ModelException} (the published routine stops at 30; from memory). Francis steps converge
+     * quadratically, so a few per eigenvalue are usual; the doubled room is a margin for badly scaled
+     * circuit matrices, and running out is reported, never turned into a number.
+     */
     private static final int MAX_ITERATIONS_PER_EIGENVALUE = 60;
+
+    /**
+     * Balancing rescales a row and column only if that lowers their norm sum below this fraction of its
+     * value (the published routine's value): smaller gains are not worth another sweep.
+     */
+    private static final double BALANCE_GAIN = 0.95;
+
+    /**
+     * Every this many iterations without a split the QR step takes an exceptional shift, which breaks
+     * the cycles that the Francis shift can fall into (the published routine does it at iterations 10 and
+     * 20).
+     */
+    private static final int EXCEPTIONAL_SHIFT_EVERY = 10;
+
+    /**
+     * The exceptional shift of the published routine: with s = |a_{n,n−1}| + |a_{n−1,n−2}|, the double-shift
+     * step takes x = y = 0.75·s and w = −0.4375·s² in place of the trailing 2×2 block's values. The values
+     * are those of the published algorithm, not tuned here.
+     */
+    private static final double EXCEPTIONAL_SHIFT = 0.75;
+
+    /** See {@link #EXCEPTIONAL_SHIFT}: the product term of the exceptional shift, w = −0.4375·s². */
+    private static final double EXCEPTIONAL_SHIFT_PRODUCT = -0.4375;
 
     private RealEigenvalues() {
     }
@@ -62,7 +91,7 @@ final class RealEigenvalues {
                         f /= radix;
                         c /= sqrdx;
                     }
-                    if ((c + r) / f < 0.95 * s) {
+                    if ((c + r) / f < BALANCE_GAIN * s) {
                         done = false;
                         g = 1.0 / f;
                         for (int j = 1; j <= n; j++) {
@@ -188,16 +217,16 @@ final class RealEigenvalues {
                             throw new ModelException("eigenvalue iteration did not converge in "
                                     + MAX_ITERATIONS_PER_EIGENVALUE + " steps (matrix of order " + n + ")");
                         }
-                        if (its % 10 == 0 && its > 0) {
+                        if (its % EXCEPTIONAL_SHIFT_EVERY == 0 && its > 0) {
                             // exceptional shift
                             t += x;
                             for (int i = 1; i <= nn; i++) {
                                 a[i][i] -= x;
                             }
                             s = Math.abs(a[nn][nn - 1]) + Math.abs(a[nn - 1][nn - 2]);
-                            x = 0.75 * s;
+                            x = EXCEPTIONAL_SHIFT * s;
                             y = x;
-                            w = -0.4375 * s * s;
+                            w = EXCEPTIONAL_SHIFT_PRODUCT * s * s;
                         }
                         ++its;
                         int m;

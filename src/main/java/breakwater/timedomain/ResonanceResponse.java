@@ -27,6 +27,50 @@ import java.util.Locale;
 public record ResonanceResponse(double frequencyHz, double q, double stepPeakOhms, double sineAmplitudeOhms,
                                 double squareAmplitudeOhms, int cyclesTo95Percent) {
 
+    /**
+     * A pole pair rings "at" f0 when its ringing frequency Im p lies within this factor of 2πf0 either
+     * way: wide enough to admit the pair behind the peak where overlapping modes pull the peak of |Z| off
+     * the pole's own frequency; among the pairs admitted, the one contributing most to Z(j2πf0) is taken,
+     * so a neighbour inside the band does not take its place.
+     */
+    private static final int NEAR_FACTOR = 2;
+
+    /**
+     * Extremes of the mode's own step response examined: they alternate about the final value and shrink
+     * as e^{σt}, so the largest lies among the first on either side; the rest of the six are room for
+     * those that fall at t &le; 0 and are skipped.
+     */
+    private static final int OWN_STEP_EXTREMES = 6;
+
+    /** Tail tolerance of the step-response march, as for the ideal-edge worst case (1e-10 relative). */
+    private static final double STEP_PEAK_TAIL_TOLERANCE = 1e-10;
+
+    /**
+     * Samples per search interval (a half period of the square wave, a period of the drive) before the
+     * golden-section refinement around the best one, which assumes that the extreme lies within one sample
+     * of it: dense against the wave's shape at f0 (the tests compare square/sine with 4/π to 0.5 %).
+     */
+    private static final int EXTREME_SAMPLES = 256;
+
+    /**
+     * The figure cyclesTo95Percent counts cycles up to this fraction of the steady state (its definition;
+     * 95 % is common practice for "settled").
+     */
+    private static final double SETTLED_FRACTION = 0.95;
+
+    /**
+     * Cycles of resonant drive tried before giving up: about Q + 0.5 cycles are needed
+     * ({@code ResonanceResponseTest}), so only a resonance of Q near 1e5, far beyond any bank, reaches the
+     * cap, and it is reported as a {@link ModelException}, not as a figure.
+     */
+    private static final int MAX_CYCLES = 100000;
+
+    /** Iteration cap of the golden-section search: 0.618⁶⁰ ≈ 3e-13 of the starting bracket. */
+    private static final int GOLDEN_MAX_ITERATIONS = 60;
+
+    /** The golden-section search stops when the bracket is below this fraction of |t|: a few dozen ulps. */
+    private static final double GOLDEN_TOLERANCE = 1e-14;
+
     public ResonanceResponse {
         if (!(frequencyHz > 0) || !Double.isFinite(frequencyHz)) {
             throw new IllegalArgumentException("resonance frequency must be > 0, got " + frequencyHz);
@@ -60,7 +104,7 @@ public record ResonanceResponse(double frequencyHz, double q, double stepPeakOhm
         double phase = Math.atan2(ri, rr);
         double best = Math.abs(w * qr); // final value −w·Re(r/p)·(−1) magnitude
         double k0 = Math.ceil((phase - Math.PI / 2) / Math.PI);
-        for (int k = 0; k < 6; k++) {
+        for (int k = 0; k < OWN_STEP_EXTREMES; k++) {
             double t = (Math.PI / 2 + (k0 + k) * Math.PI - phase) / si;
             if (t <= 0) {
                 continue;
@@ -91,7 +135,7 @@ public record ResonanceResponse(double frequencyHz, double q, double stepPeakOhm
             if (model.pi[k] == 0.0) {
                 continue;
             }
-            if (nearOnly && (model.pi[k] < w0 / 2 || model.pi[k] > 2 * w0)) {
+            if (nearOnly && (model.pi[k] < w0 / NEAR_FACTOR || model.pi[k] > NEAR_FACTOR * w0)) {
                 continue;
             }
             double v = Math.hypot(model.rr[k], model.ri[k]) / Math.hypot(model.pr[k], w0 - model.pi[k]);
@@ -124,7 +168,7 @@ public record ResonanceResponse(double frequencyHz, double q, double stepPeakOhm
 
     static double stepPeak(PoleResidueModel model) {
         final double[] acc = {model.constantTermOhms(), model.constantTermOhms()};
-        new ImpulseMarch(model).run(1e-10, (start, end, integral, positive) -> {
+        new ImpulseMarch(model).run(STEP_PEAK_TAIL_TOLERANCE, (start, end, integral, positive) -> {
             acc[0] += integral;
             acc[1] = Math.max(acc[1], acc[0]);
         });
@@ -202,24 +246,23 @@ public record ResonanceResponse(double frequencyHz, double q, double stepPeakOhm
         double min = Double.POSITIVE_INFINITY;
         for (boolean on : new boolean[]{true, false}) {
             java.util.function.DoubleUnaryOperator f = s -> sq.y(s, on);
-            double[] ext = extremes(f, 0, sq.half, 256);
-            max = Math.max(max, ext[1]);
-            min = Math.min(min, ext[0]);
+            Extremes ext = extremes(f, 0, sq.half, EXTREME_SAMPLES);
+            max = Math.max(max, ext.max());
+            min = Math.min(min, ext.min());
         }
         return 0.5 * (max - min);
     }
 
     static int cyclesTo95(PoleResidueModel model, double w0, double steady) {
-        int maxCycles = 100000;
         double period = 2 * Math.PI / w0;
-        for (int cycle = 1; cycle <= maxCycles; cycle++) {
+        for (int cycle = 1; cycle <= MAX_CYCLES; cycle++) {
             double t0 = (cycle - 1) * period;
-            double[] ext = extremes(t -> drivenFromRest(model, w0, t), t0, t0 + period, 256);
-            if (0.5 * (ext[1] - ext[0]) >= 0.95 * steady) {
+            Extremes ext = extremes(t -> drivenFromRest(model, w0, t), t0, t0 + period, EXTREME_SAMPLES);
+            if (0.5 * (ext.max() - ext.min()) >= SETTLED_FRACTION * steady) {
                 return cycle;
             }
         }
-        throw new ModelException("resonant drive did not reach 95 % of its steady state in " + maxCycles + " cycles");
+        throw new ModelException("resonant drive did not reach 95 % of its steady state in " + MAX_CYCLES + " cycles");
     }
 
     /**
@@ -263,8 +306,17 @@ public record ResonanceResponse(double frequencyHz, double q, double stepPeakOhm
         return v;
     }
 
-    /** {min, max} of f on [a, b]: n + 1 samples, then golden-section refinement around the best ones. */
-    static double[] extremes(java.util.function.DoubleUnaryOperator f, double a, double b, int n) {
+    /**
+     * The smallest and largest value of a function on an interval.
+     *
+     * @param min the smallest value found
+     * @param max the largest value found
+     */
+    record Extremes(double min, double max) {
+    }
+
+    /** Extremes of f on [a, b]: n + 1 samples, then golden-section refinement around the best ones. */
+    static Extremes extremes(java.util.function.DoubleUnaryOperator f, double a, double b, int n) {
         double h = (b - a) / n;
         int iMin = 0;
         int iMax = 0;
@@ -283,7 +335,7 @@ public record ResonanceResponse(double frequencyHz, double q, double stepPeakOhm
         }
         double lo = golden(f, a + Math.max(iMin - 1, 0) * h, a + Math.min(iMin + 1, n) * h, -1);
         double hi = golden(f, a + Math.max(iMax - 1, 0) * h, a + Math.min(iMax + 1, n) * h, 1);
-        return new double[]{Math.min(vMin, lo), Math.max(vMax, hi)};
+        return new Extremes(Math.min(vMin, lo), Math.max(vMax, hi));
     }
 
     /** Golden-section search for the maximum of sign·f on [a, b]; returns f there. */
@@ -293,7 +345,8 @@ public record ResonanceResponse(double frequencyHz, double q, double stepPeakOhm
         double x2 = a + g * (b - a);
         double f1 = sign * f.applyAsDouble(x1);
         double f2 = sign * f.applyAsDouble(x2);
-        for (int it = 0; it < 60 && b - a > 1e-14 * Math.max(Math.abs(a), Math.abs(b)); it++) {
+        for (int it = 0; it < GOLDEN_MAX_ITERATIONS && b - a > GOLDEN_TOLERANCE * Math.max(Math.abs(a), Math.abs(b));
+             it++) {
             if (f1 < f2) {
                 a = x1;
                 x1 = x2;

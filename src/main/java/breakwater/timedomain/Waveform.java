@@ -26,6 +26,52 @@ import java.util.Objects;
  */
 public record Waveform(double[] timeS, double[] loadCurrentA, double[] voltageV, double worstInstantS) {
 
+    /**
+     * Fill-in samples per period of the fastest mode near the worst instant: 16 draw its ringing as a
+     * smooth curve in the report and keep the sampled minimum within about 2 % of the ringing's amplitude
+     * of the true one (1 − cos(π/16)) between breakpoints; the breakpoints themselves, where the
+     * extremes of the worst pattern lie, are always samples.
+     */
+    private static final int SAMPLES_PER_PERIOD = 16;
+
+    /** Without modes there is no period: the pattern's length (at least {@link #FLOOR_S}) is cut in 64. */
+    private static final int SAMPLES_WITHOUT_MODES = 64;
+
+    /** Time scale used where the model has none (no modes, or an empty pattern), s. */
+    private static final double FLOOR_S = 1e-9;
+
+    /**
+     * Away from the worst instant the spacing grows to this fraction of the distance from it, so a long
+     * pattern costs about 120 samples per decade of time (ln 10/ln 1.02) instead of millions.
+     */
+    private static final double SPACING_GROWTH = 0.02;
+
+    /**
+     * A fill-in sample closer than this fraction of a step to the next breakpoint is left out: the
+     * breakpoint follows anyway, and two nearly equal times would only crowd the CSV.
+     */
+    private static final double MERGE_FRACTION = 0.25;
+
+    /** The settle window after the worst instant is at least this fraction of the pattern's length. */
+    private static final double SETTLE_FRACTION = 0.1;
+
+    /**
+     * ... and at least this many time constants 1/|p| of the fastest mode, long enough to show the
+     * recovery from the worst instant.
+     */
+    private static final int SETTLE_TIME_CONSTANTS = 10;
+
+    /**
+     * |z|² below which the hat integrals take the power series: below |z| = 0.5 the closed forms lose
+     * digits to cancellation (e^z − 1 − z ≈ z²/2 from terms near 1; all of them as z → 0), while 18 terms of
+     * the series are exact to 1e-17 ({@code WaveformTest.hatIntegralsMatchQuadrature} checks both branches and their agreement at
+     * the switch).
+     */
+    private static final double SERIES_RADIUS_SQUARED = 0.25;
+
+    /** The series runs over m = 2 … this (18 terms): the first omitted term is below 19·0.5¹⁸/20! ≈ 3e-23. */
+    private static final int SERIES_LAST_TERM = 19;
+
     public Waveform {
         Objects.requireNonNull(timeS, "timeS");
         if (timeS.length != loadCurrentA.length || timeS.length != voltageV.length || timeS.length == 0) {
@@ -52,14 +98,10 @@ public record Waveform(double[] timeS, double[] loadCurrentA, double[] voltageV,
                 || !Double.isFinite(nominalVoltageV) || !Double.isFinite(dcResistanceOhms)) {
             throw new IllegalArgumentException("waveform needs finite ΔI >= 0, I_min, V_nom and Z(0)");
         }
-        double[] tu = samples(model, pattern);
-        int n = tu.length / 2;
-        double[] t = new double[n];
-        double[] u = new double[n];
-        for (int i = 0; i < n; i++) {
-            t[i] = tu[2 * i];
-            u[i] = tu[2 * i + 1];
-        }
+        Samples samples = samples(model, pattern);
+        double[] t = samples.timeS();
+        double[] u = samples.u();
+        int n = t.length;
         double[] y = response(model, t, u);
         double uFar = pattern.value(pattern.size() - 1);
         double base = nominalVoltageV - dcResistanceOhms * minCurrentA - deltaIA * dcResistanceOhms * uFar;
@@ -105,21 +147,32 @@ public record Waveform(double[] timeS, double[] loadCurrentA, double[] voltageV,
         return Arrays.stream(voltageV).max().orElseThrow();
     }
 
-    /** Interleaved (time, u) samples: pattern breakpoints plus fill-in points, then the settle window. */
-    static double[] samples(PoleResidueModel model, LoadPattern p) {
+    /**
+     * Where the waveform is sampled: pattern breakpoints plus fill-in points, then the settle window.
+     *
+     * @param timeS ascending (non-decreasing) times, s
+     * @param u     the normalised load u at each time
+     */
+    record Samples(double[] timeS, double[] u) {
+    }
+
+    /** The samples of the waveform of {@code p} (see {@link Samples}). */
+    static Samples samples(PoleResidueModel model, LoadPattern p) {
         double total = p.lengthS();
         double fast = 0;
         for (int k = 0; k < model.modes; k++) {
             fast = Math.max(fast, Math.hypot(model.pr[k], model.pi[k]));
         }
-        double fine = fast > 0 ? 2 * Math.PI / fast / 16 : Math.max(total, 1e-9) / 64;
-        double settle = Math.max(0.1 * total, fast > 0 ? 10 / fast : 1e-9);
-        DoubleList out = new DoubleList(4 * p.size() + 256);
+        double fine = fast > 0 ? 2 * Math.PI / fast / SAMPLES_PER_PERIOD
+                : Math.max(total, FLOOR_S) / SAMPLES_WITHOUT_MODES;
+        double settle = Math.max(SETTLE_FRACTION * total, fast > 0 ? SETTLE_TIME_CONSTANTS / fast : FLOOR_S);
+        DoubleList times = new DoubleList(2 * p.size() + 128);
+        DoubleList values = new DoubleList(2 * p.size() + 128);
         int m = p.size();
         double prevT = total - p.lagS(m - 1);
         double prevU = p.value(m - 1);
-        out.add(prevT);
-        out.add(prevU);
+        times.add(prevT);
+        values.add(prevU);
         for (int i = m - 2; i >= 0; i--) {
             double tb = total - p.lagS(i);
             double ub = p.value(i);
@@ -128,18 +181,18 @@ public record Waveform(double[] timeS, double[] loadCurrentA, double[] voltageV,
             if (tb > ta) {
                 double s = ta;
                 while (true) {
-                    double step = Math.max(fine, 0.02 * (total - s));
+                    double step = Math.max(fine, SPACING_GROWTH * (total - s));
                     double next = s + step;
-                    if (next >= tb - 0.25 * step) {
+                    if (next >= tb - MERGE_FRACTION * step) {
                         break;
                     }
-                    out.add(next);
-                    out.add(ua + (ub - ua) * (next - ta) / (tb - ta));
+                    times.add(next);
+                    values.add(ua + (ub - ua) * (next - ta) / (tb - ta));
                     s = next;
                 }
             }
-            out.add(tb);
-            out.add(ub);
+            times.add(tb);
+            values.add(ub);
             prevT = tb;
             prevU = ub;
         }
@@ -147,12 +200,12 @@ public record Waveform(double[] timeS, double[] loadCurrentA, double[] voltageV,
         double s = total;
         double end = total + settle;
         while (s < end) {
-            double step = Math.max(fine, 0.02 * (s - total));
+            double step = Math.max(fine, SPACING_GROWTH * (s - total));
             s = Math.min(end, s + step);
-            out.add(s);
-            out.add(u0);
+            times.add(s);
+            values.add(u0);
         }
-        return out.toArray();
+        return new Samples(times.toArray(), values.toArray());
     }
 
     /** (h ∗ δu)(t_i) + D₀·δu + L∞·δu' at every sample, δu = u − u(earliest), exact per linear piece. */
@@ -201,7 +254,7 @@ public record Waveform(double[] timeS, double[] loadCurrentA, double[] voltageV,
      * Power series Σ (m−1) z^{m−2}/m! and Σ z^{m−2}/m! for |z| &lt; 0.5 (18 terms: error &lt; 1e-17).
      */
     static void hatIntegrals(double zr, double zi, double er, double ei, double[] out) {
-        if (zr * zr + zi * zi < 0.25) {
+        if (zr * zr + zi * zi < SERIES_RADIUS_SQUARED) {
             hatIntegralsSeries(zr, zi, out);
         } else {
             hatIntegralsClosed(zr, zi, er, ei, out);
@@ -211,13 +264,13 @@ public record Waveform(double[] timeS, double[] loadCurrentA, double[] voltageV,
     /** The power-series branch of {@link #hatIntegrals}. */
     static void hatIntegralsSeries(double zr, double zi, double[] out) {
         {
-            // Horner over m = 19 … 2
+            // Horner over m = SERIES_LAST_TERM … 2
             double fr = 0;
             double fi = 0;
             double gr = 0;
             double gi = 0;
             double[] inv = INV_FACTORIAL;
-            for (int mm = 19; mm >= 2; mm--) {
+            for (int mm = SERIES_LAST_TERM; mm >= 2; mm--) {
                 // f = f·z + (m−1)/m!,  g = g·z + 1/m!
                 double t1 = fr * zr - fi * zi + (mm - 1) * inv[mm];
                 fi = fr * zi + fi * zr;

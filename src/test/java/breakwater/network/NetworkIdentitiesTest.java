@@ -17,11 +17,19 @@ import static org.assertj.core.api.Assertions.withinPercentage;
  */
 class NetworkIdentitiesTest {
 
-    private static double[] z(SeriesBranch b, double fHz) {
+    /** An impedance R + jX. */
+    private record Impedance(double resistanceOhms, double reactanceOhms) {
+        double magnitudeOhms() {
+            return Math.hypot(resistanceOhms, reactanceOhms);
+        }
+    }
+
+    /** The branch's impedance at {@code fHz}, as 1/Y from its admittance. */
+    private static Impedance z(SeriesBranch b, double fHz) {
         double[] y = new double[2];
         b.admittance(2 * Math.PI * fHz, y);
         double m = y[0] * y[0] + y[1] * y[1];
-        return new double[] {y[0] / m, -y[1] / m};
+        return new Impedance(y[0] / m, -y[1] / m);
     }
 
     @Test
@@ -30,13 +38,12 @@ class NetworkIdentitiesTest {
         SeriesBranch b = new SeriesBranch("c", 5e-3, 1.2e-9, 1e-6);
         double f0 = 1 / (2 * Math.PI * Math.sqrt(1.2e-9 * 1e-6));
         assertThat(b.seriesResonanceHz()).isCloseTo(f0, withinPercentage(1e-10));
-        double[] at = z(b, f0);
-        assertThat(Math.hypot(at[0], at[1])).isCloseTo(5e-3, withinPercentage(1e-6));
-        assertThat(z(b, f0 / 3)[1]).isNegative();
-        assertThat(z(b, f0 * 3)[1]).isPositive();
+        assertThat(z(b, f0).magnitudeOhms()).isCloseTo(5e-3, withinPercentage(1e-6));
+        assertThat(z(b, f0 / 3).reactanceOhms()).isNegative();
+        assertThat(z(b, f0 * 3).reactanceOhms()).isPositive();
         // and the reactance itself: X = ωL − 1/(ωC)
         double w = 2 * Math.PI * f0 * 3;
-        assertThat(z(b, f0 * 3)[1]).isCloseTo(w * 1.2e-9 - 1 / (w * 1e-6), withinPercentage(1e-9));
+        assertThat(z(b, f0 * 3).reactanceOhms()).isCloseTo(w * 1.2e-9 - 1 / (w * 1e-6), withinPercentage(1e-9));
     }
 
     @Test

@@ -55,8 +55,12 @@ final class CircuitOde implements FirstOrderDifferentialEquations {
         return segU0 + segSlope * (t - segT0);
     }
 
-    /** Node voltages {V_board, V_load} from the state and the load current. */
-    private double[] nodeVoltages(double[] y, double load) {
+    /** The two node voltages, V (equal without a package). */
+    private record NodeVoltages(double boardV, double loadV) {
+    }
+
+    /** Node voltages from the state and the load current. */
+    private NodeVoltages nodeVoltages(double[] y, double load) {
         boolean pkg = net.hasPackage();
         double iReg = y[0];
         double iPkg = pkg ? y[1] : 0;
@@ -91,7 +95,7 @@ final class CircuitOde implements FirstOrderDifferentialEquations {
         }
         double vb = (inB + sB) / gB;
         double vl = pkg ? (inL + sL) / gL : vb;
-        return new double[]{vb, vl};
+        return new NodeVoltages(vb, vl);
     }
 
     @Override
@@ -99,9 +103,9 @@ final class CircuitOde implements FirstOrderDifferentialEquations {
         boolean pkg = net.hasPackage();
         // the load draws u: injected current −u; we integrate the network driven by +u injected so that
         // the output voltage equals (Z ∗ u)(t) directly
-        double[] v = nodeVoltages(y, -u(t));
-        double vb = v[0];
-        double vl = v[1];
+        NodeVoltages v = nodeVoltages(y, -u(t));
+        double vb = v.boardV();
+        double vl = v.loadV();
         yDot[0] = (vb - net.regulatorResistanceOhms() * y[0]) / net.regulatorInductanceH();
         if (pkg) {
             yDot[1] = (vl - vb - net.packageResistanceOhms() * y[1]) / net.packageInductanceH();
@@ -159,6 +163,6 @@ final class CircuitOde implements FirstOrderDifferentialEquations {
         segT0 = total;
         segU0 = vals[0];
         segSlope = 0;
-        return nodeVoltages(y, -vals[0])[1];
+        return nodeVoltages(y, -vals[0]).loadV();
     }
 }

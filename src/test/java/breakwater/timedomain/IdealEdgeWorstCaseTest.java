@@ -15,7 +15,7 @@ class IdealEdgeWorstCaseTest {
     /**
      * Reference: Commons Math DormandPrince853Integrator on the circuit's own state equations
      * ({@link CircuitOde}, written from Kirchhoff's laws, not from the descriptor matrices), driven by the
-     * reported droop pattern from rest. Tolerance 1e-5 relative (the brief allows 0.5 %): the integrator
+     * reported droop pattern from rest. Tolerance 1e-5 relative (0.5 % is required): the integrator
      * runs at 1e-11 relative per step; the neglected tail before the pattern is below 1e-10.
      */
     @Test

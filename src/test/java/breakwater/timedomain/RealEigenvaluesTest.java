@@ -30,8 +30,8 @@ class RealEigenvaluesTest {
             double[] wi = new double[n];
             RealEigenvalues.compute(a, n, wr, wi);
             EigenDecomposition ref = new EigenDecomposition(new Array2DRowRealMatrix(a));
-            double[][] mine = sorted(wr, wi);
-            double[][] theirs = sorted(ref.getRealEigenvalues(), ref.getImagEigenvalues());
+            Eigenvalue[] mine = sorted(wr, wi);
+            Eigenvalue[] theirs = sorted(ref.getRealEigenvalues(), ref.getImagEigenvalues());
             double norm = 0;
             for (double[] row : a) {
                 for (double v : row) {
@@ -41,8 +41,8 @@ class RealEigenvaluesTest {
             // eigenvalues of a nonsymmetric matrix are only as well conditioned as the matrix allows:
             // both are backward stable, so agreement to ~1e-8 of the norm is the fair expectation here
             for (int k = 0; k < n; k++) {
-                assertThat(mine[k][0]).isCloseTo(theirs[k][0], within(1e-7 * norm * n));
-                assertThat(mine[k][1]).isCloseTo(theirs[k][1], within(1e-7 * norm * n));
+                assertThat(mine[k].re()).isCloseTo(theirs[k].re(), within(1e-7 * norm * n));
+                assertThat(mine[k].im()).isCloseTo(theirs[k].im(), within(1e-7 * norm * n));
             }
         }
     }
@@ -59,20 +59,25 @@ class RealEigenvaluesTest {
         double[] wr = new double[4];
         double[] wi = new double[4];
         RealEigenvalues.compute(a, 4, wr, wi);
-        double[][] s = sorted(wr, wi);
-        assertThat(s[0][0]).isCloseTo(-1, within(1e-12));
-        assertThat(Math.abs(s[0][1])).isCloseTo(2, within(1e-12));
-        assertThat(s[2][0]).isCloseTo(1, within(1e-12));
-        assertThat(s[3][0]).isCloseTo(2, within(1e-12));
+        Eigenvalue[] s = sorted(wr, wi);
+        assertThat(s[0].re()).isCloseTo(-1, within(1e-12));
+        assertThat(Math.abs(s[0].im())).isCloseTo(2, within(1e-12));
+        assertThat(s[2].re()).isCloseTo(1, within(1e-12));
+        assertThat(s[3].re()).isCloseTo(2, within(1e-12));
     }
 
-    private static double[][] sorted(double[] wr, double[] wi) {
-        double[][] v = new double[wr.length][];
+    /** An eigenvalue re + j·im. */
+    private record Eigenvalue(double re, double im) {
+    }
+
+    /** The eigenvalues by real part (rounded to 1e-6, so that conjugates stay together), then imaginary part. */
+    private static Eigenvalue[] sorted(double[] wr, double[] wi) {
+        Eigenvalue[] v = new Eigenvalue[wr.length];
         for (int i = 0; i < wr.length; i++) {
-            v[i] = new double[]{wr[i], wi[i]};
+            v[i] = new Eigenvalue(wr[i], wi[i]);
         }
-        Arrays.sort(v, Comparator.<double[]>comparingDouble(x -> Math.round(x[0] * 1e6) / 1e6)
-                .thenComparingDouble(x -> x[1]));
+        Arrays.sort(v, Comparator.<Eigenvalue>comparingDouble(x -> Math.round(x.re() * 1e6) / 1e6)
+                .thenComparingDouble(Eigenvalue::im));
         return v;
     }
 }

@@ -54,7 +54,7 @@ class WaveformTest {
     /**
      * Reference: Commons Math DormandPrince853Integrator on the circuit's own equations ({@link CircuitOde}),
      * driven by the waveform's own samples (time, current) as a piecewise-linear current: it reproduces the
-     * waveform's voltage at the worst instant. The brief asks for 0.5 %; we hold 1e-5 (integrator at 1e-11).
+     * waveform's voltage at the worst instant. The required agreement is 0.5 %; we hold 1e-5 (integrator at 1e-11).
      */
     @Test
     void resimulatingTheSampledCurrentReproducesTheDroop() throws Exception {
