@@ -49,6 +49,56 @@ class ArchitectureTest {
                 + "ArchitectureRules.TEMPORARY_EXCEPTIONS").isEmpty();
     }
 
+    /** A citation of the project's documents in source: a file of {@code docs/*.md}, with an optional anchor. */
+    /** Any Markdown file named in source: it must be one of the repository's own. */
+    static final Pattern ANY_DOCUMENT = Pattern.compile("(?<![A-Za-z0-9_./-])([A-Za-z0-9_][A-Za-z0-9_./-]*\\.md)\\b");
+
+    static final Pattern DOC_REFERENCE = Pattern.compile("docs/([a-z0-9-]+\\.md)(?:#([a-z0-9-]+))?");
+
+    /**
+     * Every {@code docs/…md#anchor} that a main or test source, the contributor guide or the README cites
+     * names a file of the repository's {@code docs/} and, with an anchor, an {@code id} in that file; and every other
+     * Markdown file a source names is one of the repository's own.
+     */
+    @Test
+    void everyDocumentReferenceResolvesInsideTheRepository() throws IOException {
+        List<Path> files = new ArrayList<>();
+        try (Stream<Path> s = Stream.concat(Files.walk(ROOT.resolve("src/main/java")), Files.walk(ROOT.resolve("src/test/java")))) {
+            s.filter(p -> p.toString().endsWith(".java")).sorted().forEach(files::add);
+        }
+        files.add(ROOT.resolve("DEVELOPERS.md"));
+        files.add(ROOT.resolve("README.md"));
+        List<String> broken = new ArrayList<>();
+        int found = 0;
+        for (Path p : files) {
+            List<String> lines = Files.readAllLines(p, StandardCharsets.UTF_8);
+            for (int i = 0; i < lines.size(); i++) {
+                String line = lines.get(i);
+                Matcher any = ANY_DOCUMENT.matcher(line);
+                while (any.find()) {
+                    String name = any.group(1);
+                    if (!Files.isRegularFile(ROOT.resolve(name)) && !Files.isRegularFile(ROOT.resolve("docs").resolve(name))) {
+                        broken.add(ROOT.relativize(p) + ":" + (i + 1) + ": " + name + " is not a document of the repository");
+                    }
+                }
+                Matcher m = DOC_REFERENCE.matcher(line);
+                while (m.find()) {
+                    found++;
+                    Path doc = ROOT.resolve("docs").resolve(m.group(1));
+                    if (!Files.isRegularFile(doc)) {
+                        broken.add(ROOT.relativize(p) + ":" + (i + 1) + ": docs/" + m.group(1) + " does not exist");
+                    } else if (m.group(2) != null
+                            && !Files.readString(doc, StandardCharsets.UTF_8).contains("id=\"" + m.group(2) + "\"")) {
+                        broken.add(ROOT.relativize(p) + ":" + (i + 1) + ": docs/" + m.group(1) + " has no anchor '"
+                                + m.group(2) + "'");
+                    }
+                }
+            }
+        }
+        assertThat(found).as("document references found").isGreaterThan(30);
+        assertThat(broken).as("document references that do not resolve").isEmpty();
+    }
+
     @Test
     void everyPackageIsInTheOrderAndHasAPackageInfoNamingItsDocument() throws IOException {
         ArchitectureRules rules = ArchitectureRules.documented();

@@ -16,7 +16,7 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * Reads a bank file (CSV, DESIGN.md §2): a header row {@code part,count} (any case, any order), then one
+ * Reads a bank file (CSV, docs/file-contracts.md#bank-csv): a header row {@code part,count} (any case, any order), then one
  * row per part of the catalog with how many of it are placed. {@code #} lines are comments. Rows with
  * count 0 are accepted and dropped. Breakwater's own {@code bom.csv} reads back as a bank: its columns
  * {@code description, case, unit_cost, extended_cost} are ignored and its {@code TOTAL} row skipped.

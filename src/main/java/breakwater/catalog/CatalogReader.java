@@ -22,7 +22,7 @@ import java.util.Optional;
 import java.util.stream.Stream;
 
 /**
- * Reads a parts catalog (CSV, DESIGN.md §2).
+ * Reads a parts catalog (CSV, docs/file-contracts.md#catalog-csv).
  *
  * <p>Format: an optional block of {@code #} comment lines, a header row naming the columns (any case,
  * any order), then one row per part. Required columns: {@code part, capacitance, esr, esl,

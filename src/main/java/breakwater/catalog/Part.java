@@ -80,7 +80,7 @@ public record Part(
                 Double.NaN, Double.NaN, 1.0, -1);
     }
 
-    /** Capacitance used by the model: nominal × DC-bias retention (DESIGN.md §1). */
+    /** Capacitance used by the model: nominal × DC-bias retention (docs/network-model.md#dc-bias-retention). */
     public double effectiveCapacitanceF() {
         return capacitanceF * dcBiasRetention;
     }

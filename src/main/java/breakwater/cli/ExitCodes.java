@@ -2,7 +2,7 @@ package breakwater.cli;
 
 import breakwater.design.Verdict;
 
-/** Process exit codes (DESIGN.md §4), shown in {@code --help}. */
+/** Process exit codes (docs/file-contracts.md#exit-codes), shown in {@code --help}. */
 public final class ExitCodes {
     /** Success: the bank meets the spec. */
     public static final int OK = 0;

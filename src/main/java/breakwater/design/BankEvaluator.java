@@ -25,7 +25,7 @@ import java.util.Objects;
 import java.util.Optional;
 
 /**
- * The single judge of a bank on a rail, used by the solver and the reports alike (DESIGN.md §5).
+ * The single judge of a bank on a rail, used by the solver and the reports alike (docs/architecture.md#package-order).
  */
 public final class BankEvaluator {
     private final Scenario scenario;

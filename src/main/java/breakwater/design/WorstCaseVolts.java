@@ -3,7 +3,7 @@ package breakwater.design;
 import breakwater.scenario.Rail;
 
 /**
- * The exact worst case of a bank in volts, against the rail's tolerance band (DESIGN.md §1):
+ * The exact worst case of a bank in volts, against the rail's tolerance band (docs/worst-case.md#notation):
  * V_min = V_nom − Z(0)·I_min − droop, V_max = V_nom − Z(0)·I_min + overshoot; the bank passes when
  * both stay inside V_nom·(1 ± tolerance).
  *

@@ -9,7 +9,7 @@ import breakwater.scenario.Band;
 public record FrequencyGrid(double[] frequenciesHz) {
 
     /**
-     * Default density for reports and checks (DESIGN.md: 200 points per decade): steps of 1.16 % in
+     * Default density for reports and checks (docs/network-model.md#frequency-grids: 200 points per decade): steps of 1.16 % in
      * frequency, so every anti-resonance of Q up to about 40 (half-power width f0/Q) spans at least two
      * points and is seen as a local maximum; its exact peak is then refined against the network
      * ({@link ImpedanceAnalysis}).

@@ -9,7 +9,7 @@ import java.util.List;
  * regulator plus the fixed board branches (plane, and die without a package), the package impedance, the
  * fixed load-node admittance, and the admittance Y₁ of ONE part of each candidate type. A bank with counts
  * n_p then has Y_board = Y_fixed + Σ n_p·Y₁,p, which is exact: n identical branches in parallel have n
- * times the admittance of one (DESIGN.md §1). Results agree with {@link PowerNetwork#impedance} to
+ * times the admittance of one (docs/network-model.md#the-fast-per-part-engine). Results agree with {@link PowerNetwork#impedance} to
  * rounding (tested).
  */
 public final class ImpedanceEngine {

@@ -8,7 +8,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
-/** Builds the {@link PowerNetwork} of a scenario with a given bank (DESIGN.md §1). */
+/** Builds the {@link PowerNetwork} of a scenario with a given bank (docs/network-model.md#the-lumped-network). */
 public final class NetworkBuilder {
     private NetworkBuilder() {
     }

@@ -26,7 +26,7 @@ public final class PartBranches {
 
     /**
      * One part as a branch: R = ESR, L = ESL + mounting inductance, C = nominal × DC-bias retention
-     * (DESIGN.md §1).
+     * (docs/network-model.md#the-lumped-network).
      */
     public static SeriesBranch single(Part part, Optional<Footprint> footprint) {
         return new SeriesBranch(part.name(), part.esrOhms(), part.eslH() + mountInductanceH(part, footprint),

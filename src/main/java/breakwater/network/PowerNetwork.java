@@ -4,7 +4,7 @@ import java.util.List;
 import java.util.Objects;
 
 /**
- * The lumped small-signal power network of DESIGN.md §1, seen from the load:
+ * The lumped small-signal power network (docs/network-model.md#the-lumped-network), seen from the load:
  * <pre>
  * regulator ─ R_reg ─ L_reg ─┬─ board node ─ R_pkg ─ L_pkg ─┬─ load node
  *                            │                               │
@@ -49,7 +49,7 @@ public record PowerNetwork(
 
     /**
      * Resistance at DC, Z(0) = R_reg + R_pkg: every shunt branch holds a capacitor, so no DC current
-     * flows in it (DESIGN.md §1).
+     * flows in it (docs/network-model.md#dc-and-summing-admittances).
      */
     public double dcResistanceOhms() {
         return regulatorResistanceOhms + (hasPackage ? packageResistanceOhms : 0.0);

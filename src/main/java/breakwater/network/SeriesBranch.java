@@ -5,7 +5,7 @@ import java.util.Objects;
 /**
  * A shunt branch R + sL + 1/(sC) from a node to ground: a capacitor with its ESR and total series
  * inductance (own ESL plus mounting), the plane, or the die. n identical parts in parallel are one branch
- * with R/n, L/n and n·C (DESIGN.md §1), see {@link #parallel(int)}.
+ * with R/n, L/n and n·C (docs/network-model.md#the-lumped-network), see {@link #parallel(int)}.
  *
  * @param label          for reports and messages ("plane", "die", a part name)
  * @param resistanceOhms series resistance, &ge; 0

@@ -8,7 +8,7 @@ import java.io.IOException;
 import java.io.Writer;
 import java.util.Locale;
 
-/** The CSV result files of DESIGN.md §3. */
+/** The CSV result files (docs/file-contracts.md#output-files). */
 public final class CsvOutputs {
     private CsvOutputs() {
     }

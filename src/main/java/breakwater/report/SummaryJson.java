@@ -18,7 +18,7 @@ import java.io.IOException;
 import java.io.Writer;
 
 /**
- * summary.json (DESIGN.md §3): the machine-readable result. Numbers are SI, full double precision,
+ * summary.json (docs/file-contracts.md#summary-json): the machine-readable result. Numbers are SI, full double precision,
  * locale-independent.
  */
 public final class SummaryJson {

@@ -40,7 +40,7 @@ public record Rail(String name, double voltageV, double toleranceFraction, doubl
     }
 
     /**
-     * Target impedance Z_t = V_nom × tolerance / ΔI (common practice; DESIGN.md §1).
+     * Target impedance Z_t = V_nom × tolerance / ΔI (common practice; docs/network-model.md#target-impedance).
      * A guide, not a guarantee.
      */
     public double targetImpedanceOhms() {

@@ -6,7 +6,7 @@ import java.util.Objects;
 import java.util.Optional;
 
 /**
- * A rail scenario as read from its TOML file (DESIGN.md §2).
+ * A rail scenario as read from its TOML file (docs/file-contracts.md#scenario-toml).
  *
  * @param source        the scenario file as the user named it (for messages)
  * @param rail          electrical spec

@@ -27,7 +27,7 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
- * Reads a rail scenario (TOML, DESIGN.md §2).
+ * Reads a rail scenario (TOML, docs/file-contracts.md#scenario-toml).
  *
  * <p>Sections and keys (required ones marked *):
  * <pre>

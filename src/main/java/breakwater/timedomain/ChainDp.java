@@ -1,7 +1,7 @@
 package breakwater.timedomain;
 
 /**
- * Exact solution of the chain linear program of worst-case-math.md §3:
+ * Exact solution of the chain linear program (docs/worst-case.md#the-dynamic-program):
  * <pre>
  *   maximise Σ_k w_k·u_k   subject to   0 ≤ u_k ≤ 1,   |u_{k+1} − u_k| ≤ c_k
  * </pre>

@@ -3,7 +3,7 @@ package breakwater.timedomain;
 /**
  * Objective weights of the slew-limited worst case: with u piecewise linear on lags τ_0 = 0 &lt; τ_1 &lt; …
  * (hat functions φ_k), (h ∗ u)(T) = Σ_k w_k u_k with hat weights w_k = ∫ h(τ) φ_k(τ) dτ
- * (worst-case-math.md §3), the last node also collecting ∫_{τ_n}^∞ h (u holds beyond the grid), plus D₀
+ * (docs/worst-case.md#the-chain-lp), the last node also collecting ∫_{τ_n}^∞ h (u holds beyond the grid), plus D₀
  * on u₀ and, for a load node with series inductance L∞, L∞/(τ₁ − τ₀) on u₀ and minus that on u₁.
  *
  * <p>Closed form per mode and segment [a, a + Δ] ({@link Waveform#hatIntegrals}):

@@ -3,7 +3,7 @@ package breakwater.timedomain;
 /**
  * Splits the smooth impulse response h(t) = Σ w_i Re(r_i e^{p_i t}) into its sign intervals and
  * integrates h exactly over each one with the antiderivative H(t) = Σ w_i Re((r_i/p_i) e^{p_i t})
- * (worst-case-math.md §2): no quadrature sum, no dependence on a fixed step.
+ * (docs/worst-case.md#ideal-edges): no quadrature sum, no dependence on a fixed step.
  *
  * <p>Crossings are found by sampling h and h' on a grid whose step is 1/8 of the period 2π/|p| of the
  * fastest mode still alive (values advanced by the recurrence e^{p(t+Δ)} = e^{pt}·e^{pΔ}, no exp call

@@ -6,7 +6,7 @@ import breakwater.network.SeriesBranch;
 import java.util.List;
 
 /**
- * The network of DESIGN.md §1 flattened into primitive arrays, with the admittance Y(s) seen from the
+ * The network (docs/network-model.md#the-lumped-network) flattened into primitive arrays, with the admittance Y(s) seen from the
  * load node and its derivative Y'(s) at any complex s, in closed form:
  * <ul>
  * <li>shunt branch R + sL + 1/(sC): y = sC/d, d = 1 + sRC + s²LC, y' = C(1 − s²LC)/d²;</li>

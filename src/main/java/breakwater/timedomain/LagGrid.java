@@ -1,8 +1,8 @@
 package breakwater.timedomain;
 
 /**
- * The lag grid of the slew-limited worst case (worst-case-math.md §3), with 1/48 where §3 says 1/24 (the
- * discretisation gap falls with the square of the step): from 0 a step of min(t_e/8, T_min/48)
+ * The lag grid of the slew-limited worst case (docs/worst-case.md#lag-grid-and-its-error-bound;
+ * the discretisation gap falls with the square of the step): from 0 a step of min(t_e/8, T_min/48)
  * (T = 2π/|p|; at least T_min/{@value #FINEST_FRACTION}) over 24 periods of the fastest mode (at least
  * 16 t_e); then blocks of 16 steps, each block's step doubled but never above 1/48 of the period of any
  * mode still alive (less for modes of Q above {@value #HIGH_Q}); until every mode has decayed to

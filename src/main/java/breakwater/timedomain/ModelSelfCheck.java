@@ -7,7 +7,7 @@ import java.util.Locale;
 /**
  * The checks a pole–residue model passes before it is returned, else {@link ModelException}: every mode
  * decays (Re p_i &lt; 0, {@link #requireDecaying}); the identity Z(0) = D₀ + Σ r_i/(−p_i)
- * (worst-case-math.md §1) to {@link #IDENTITY_TOLERANCE} relative; and Z(jω) of the model equal to the
+ * (docs/worst-case.md#the-z0-identity) to {@link #IDENTITY_TOLERANCE} relative; and Z(jω) of the model equal to the
  * frequency-domain engine {@link PowerNetwork#impedance} to {@link #CHECK_TOLERANCE} relative at up to
  * {@value #CHECKED_POLE_FREQUENCIES} pole frequencies, below the slowest and above the fastest pole
  * ({@link #check}). Tested in {@code ModelSelfCheckTest}.
@@ -85,7 +85,7 @@ final class ModelSelfCheck {
         double[] ri = model.ri;
         double[] weight = model.weight;
         double constantOhms = model.constantTermOhms();
-        // Z(0) identity (worst-case-math.md §1)
+        // Z(0) identity (docs/worst-case.md#the-z0-identity)
         double z0 = constantOhms;
         double scale = Math.abs(constantOhms);
         for (int k = 0; k < modes; k++) {

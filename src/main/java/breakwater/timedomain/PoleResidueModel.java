@@ -4,7 +4,7 @@ import breakwater.network.PowerNetwork;
 import breakwater.network.SeriesBranch;
 
 /**
- * The impedance at the load node in pole–residue form (worst-case-math.md §1):
+ * The impedance at the load node in pole–residue form (docs/worst-case.md#pole-residue-form):
  * <pre>
  *   Z(s) = s·L∞ + D₀ + Σ_i r_i/(s − p_i)
  * </pre>

@@ -3,7 +3,7 @@ package breakwater.timedomain;
 /**
  * Collects the sign intervals of h reported by {@link ImpulseMarch}: the integral of max(h, 0) and of
  * max(−h, 0) and, when asked, the crossing times, from which the ideal-edge worst-case patterns follow
- * (worst-case-math.md §2): u(lag) = 1 where h(lag) &gt; 0 for the droop, where h(lag) &lt; 0 for the
+ * (docs/worst-case.md#ideal-edges): u(lag) = 1 where h(lag) &gt; 0 for the droop, where h(lag) &lt; 0 for the
  * overshoot.
  */
 final class SignIntervals implements ImpulseMarch.Sink {

@@ -10,7 +10,7 @@ import java.util.Objects;
  * window (10 % of T, at least ten time constants of the fastest mode). Before time 0 the load is taken to
  * have held its earliest value for ever (steady state).
  *
- * <p>Voltage (worst-case-math.md notation): v(t) = V_nom − Z(0)·I_min − ΔI·(h ∗ u)(t), computed exactly
+ * <p>Voltage (docs/worst-case.md#notation): v(t) = V_nom − Z(0)·I_min − ΔI·(h ∗ u)(t), computed exactly
  * from the pole–residue form: every mode's state x' = p·x + δu is advanced across each interval on which
  * u is linear by x_b = e^{pΔ}x_a + Δ·(u_a·f_R(pΔ) + u_b·f_L(pΔ)), with f_R(z) = (z e^z − e^z + 1)/z²
  * and f_L(z) = (e^z − 1 − z)/z² (power series for |z| &lt; 0.5, no cancellation), plus D₀·δu and

@@ -4,7 +4,7 @@ import java.util.Locale;
 
 /**
  * The exact worst-case transient of a load node, per ampere of load step ΔI (Reverse Pulse Technique,
- * worst-case-math.md §2–3). The load current is i(t) = I_min + ΔI·u(t) with 0 &le; u &le; 1; the
+ * docs/worst-case.md#ideal-edges and #slew-limited-loads). The load current is i(t) = I_min + ΔI·u(t) with 0 &le; u &le; 1; the
  * voltage is v = V_nom − Z(0)·I_min − ΔI·(h ∗ u).
  *
  * <p>Ideal edges (t_e = 0): droop P = ∫max(h, 0) dt + max(D, 0), overshoot N = ∫max(−h, 0) dt +
@@ -99,7 +99,7 @@ public final class WorstCaseAnalyzer {
 
     /**
      * The exact worst case over every load current u(t) ∈ [0, 1] with |du/dt| ≤ 1/t_e
-     * (worst-case-math.md §3): u piecewise linear on the lag grid of {@link LagGrid}, objective
+     * (docs/worst-case.md#the-chain-lp): u piecewise linear on the lag grid of {@link LagGrid}, objective
      * Σ w_k u_k with hat-function weights w_k = ∫ h φ_k in closed form per mode, D₀ on u₀, and for a load
      * node with series inductance L∞ the term L∞·(u₀ − u₁)/(τ₁ − τ₀); constraints 0 ≤ u_k ≤ 1,
      * |u_{k+1} − u_k| ≤ (τ_{k+1} − τ_k)/t_e; solved exactly by {@link ChainDp}, once for the droop

@@ -28,7 +28,7 @@ class WorstCaseVoltsTest {
         WorstCaseVolts f = e.figures();
         assertThat(f.droopV()).isCloseTo(rail.currentStepA() * zt, within(1e-9));
         assertThat(f.rogueFactor()).isCloseTo(1.0, within(1e-9));
-        // DESIGN.md §1: V_min = V_nom − Z(0)·I_min − droop, with Z(0) = R_reg here
+        // docs/worst-case.md#notation: V_min = V_nom − Z(0)·I_min − droop, with Z(0) = R_reg here
         assertThat(f.minVoltageV()).isCloseTo(1.0 - zt * rail.minCurrentA() - f.droopV(), within(1e-12));
         // P − N = Z(0) (worst-case mathematics): droop − overshoot = ΔI·Z(0)
         assertThat(f.droopV() - f.overshootV()).isCloseTo(rail.currentStepA() * zt, within(1e-9));

@@ -47,7 +47,7 @@ class ExcursionFrontierTest {
         double deltaI = spec.scenario().rail().currentStepA();
         assertThat(f.allowedV()).isEqualTo(Math.min(op - spec.limits().lowerV(),
                 spec.limits().upperV() - op + deltaI * z0));
-        // and that identity holds on every bank of the frontier (worst-case-math: droop − overshoot = ΔI·Z(0))
+        // and that identity holds on every bank of the frontier (docs/worst-case.md#ideal-edges: droop − overshoot = ΔI·Z(0))
         for (ExcursionFrontier.Point p : f.points()) {
             assertThat(p.evaluation().figures().droopV() - p.evaluation().figures().overshootV())
                     .isCloseTo(deltaI * z0, org.assertj.core.api.Assertions.within(1e-9));

@@ -23,7 +23,7 @@ class EdgeLimitedWorstCaseTest {
 
     /**
      * Reference: Commons Math SimplexSolver (a general LP solver) on the same chain LP over a coarse grid
-     * of 60 lags (worst-case-math.md §4, first cross-check). Tolerance 1e-9 relative: both are exact LP
+     * of 60 lags (docs/worst-case.md#cross-checks). Tolerance 1e-9 relative: both are exact LP
      * optima; the simplex works to about 1e-10 in its pivoting.
      */
     @Test
@@ -100,7 +100,7 @@ class EdgeLimitedWorstCaseTest {
     /**
      * A high-Q resonance rings for many periods, so most of its worst case is collected on the coarser part
      * of the grid. Reference: the ideal-edge worst case, the t_e → 0 limit and an upper bound of every
-     * slew-limited one (worst-case-math.md §3). One resonance (regulator inductance and a capacitor, Q from
+     * slew-limited one (docs/worst-case.md#lag-grid-and-its-error-bound). One resonance (regulator inductance and a capacitor, Q from
      * 20 to 200) with t_e = 1e-4 of its period: the grid optimum stays within 5e-4 of that limit (before the
      * coarse steps shrank with Q it fell 1.3e-3 short at Q = 100 and 2e-3 at Q = 200).
      */
@@ -122,7 +122,7 @@ class EdgeLimitedWorstCaseTest {
     }
 
     /**
-     * DESIGN.md §1: ramped versions of the ideal-edge pattern are only a lower bound; when a resonance is
+     * docs/worst-case.md#slew-limited-loads: ramped versions of the ideal-edge pattern are only a lower bound; when a resonance is
      * faster than t_e the exact optimum drives it with partial swings. One anti-resonance at 100 MHz
      * (period 10 ns, Q = 20) and t_e = 10 ns: the ramped ideal pattern (edges become centred ramps of
      * t_e) averages each period to a constant and nearly stops driving the resonance, while the optimum

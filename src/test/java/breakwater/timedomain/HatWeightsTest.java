@@ -71,7 +71,7 @@ class HatWeightsTest {
 
     /**
      * Reference: the hat functions sum to 1 on [τ_0, τ_n] and the last node collects ∫_{τ_n}^∞ h, so the
-     * weights sum to ∫₀^∞ h = Z(0) − D₀ (worst-case-math.md §1; Z(0) = R_reg + R_pkg from the network). Also
+     * weights sum to ∫₀^∞ h = Z(0) − D₀ (docs/worst-case.md#the-z0-identity; Z(0) = R_reg + R_pkg from the network). Also
      * the exact response to a constant load u ≡ 1 is Z(0) (DC steady state), on one lag and on several.
      * Tolerance 1e-12 of Σ|r|/|Re p|: sums of up to thousands of rounded terms (measured 3e-15).
      */

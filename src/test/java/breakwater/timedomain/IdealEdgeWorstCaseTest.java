@@ -38,7 +38,7 @@ class IdealEdgeWorstCaseTest {
         assertThat(simulated).isCloseTo(-wc.overshootOhms(), within(1e-5 * wc.overshootOhms()));
     }
 
-    /** Reference: worst-case-math.md §2, droop − overshoot = ∫h + D = Z(0) = R_reg + R_pkg. */
+    /** Reference: docs/worst-case.md#ideal-edges, droop − overshoot = ∫h + D = Z(0) = R_reg + R_pkg. */
     @Test
     void droopMinusOvershootIsDcResistance() throws Exception {
         PowerNetwork net = Networks.realistic();

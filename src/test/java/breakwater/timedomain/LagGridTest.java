@@ -19,7 +19,7 @@ class LagGridTest {
     /**
      * Discretisation: the grid optimum is a lower bound of the continuous one; halving every step moves it
      * by less than 3e-4 relative (measured: 6e-6 … 1.2e-4 on the realistic network), and it never exceeds
-     * the ideal-edge bound, which it approaches as t_e → 0 (worst-case-math.md §3).
+     * the ideal-edge bound, which it approaches as t_e → 0 (docs/worst-case.md#lag-grid-and-its-error-bound).
      */
     @Test
     void gridRefinementAndIdealLimit() throws Exception {

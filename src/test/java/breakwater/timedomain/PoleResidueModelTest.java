@@ -48,7 +48,7 @@ class PoleResidueModelTest {
         assertThat(order).isEqualTo(20);
     }
 
-    /** Reference: worst-case-math.md §1, ∫h = Z(0) = D + Σ r/(−p); Z(0) = R_reg + R_pkg (DESIGN.md §1). */
+    /** Reference: docs/worst-case.md#the-z0-identity, ∫h = Z(0) = D + Σ r/(−p); Z(0) = R_reg + R_pkg (docs/network-model.md#dc-and-summing-admittances). */
     @Test
     void dcIdentityHoldsOnRandomNetworks() {
         Random rnd = new Random(12);

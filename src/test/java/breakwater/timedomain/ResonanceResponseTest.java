@@ -38,7 +38,7 @@ class ResonanceResponseTest {
     }
 
     /**
-     * Common practice (resonance facts of the trade, DESIGN.md §1, values from memory, no published
+     * Common practice (resonance facts of the trade, docs/worst-case.md#resonance-figures, values from memory, no published
      * source): at Q ≈ 5.6 the resonant sine steady state is about 3.2 × the step-response peak and a 50 %
      * square wave about 4.1 ×; ±3 % because the rule of thumb is quoted to two digits.
      */

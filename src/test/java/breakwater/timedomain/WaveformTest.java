@@ -16,7 +16,7 @@ class WaveformTest {
     private static final double I_MIN = 0.5;
     private static final double V_NOM = 0.95;
 
-    /** The waveform's lowest voltage is the worst-case droop: V_nom − Z(0)·I_min − ΔI·droop (DESIGN.md §1). */
+    /** The waveform's lowest voltage is the worst-case droop: V_nom − Z(0)·I_min − ΔI·droop (docs/worst-case.md#notation). */
     @Test
     void droopWaveformReachesTheBoundAtTheWorstInstant() throws Exception {
         PowerNetwork net = Networks.realistic();

@@ -17,7 +17,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
 /**
- * Properties of the worst case (worst-case-math.md §4): no load pattern inside the constraints exceeds
+ * Properties of the worst case (docs/worst-case.md#cross-checks): no load pattern inside the constraints exceeds
  * it, and it scales with the impedance. Patterns are evaluated by the exact convolution of
  * {@link Waveform} (mode states advanced segment by segment, a different formulation from the hat-weight
  * sums of the analyser) and, for a few, by Commons Math's DormandPrince853Integrator on the circuit.
