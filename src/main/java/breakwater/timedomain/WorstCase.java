@@ -13,14 +13,7 @@ public record WorstCase(double droopOhms, double overshootOhms, LoadPattern droo
                         LoadPattern overshootPattern, double edgeTimeS) {
 
     public WorstCase {
-        if (!(droopOhms >= 0) || !Double.isFinite(droopOhms) || !(overshootOhms >= 0)
-                || !Double.isFinite(overshootOhms)) {
-            throw new IllegalArgumentException("worst-case droop and overshoot must be finite and >= 0, got "
-                    + droopOhms + ", " + overshootOhms);
-        }
-        if (!(edgeTimeS >= 0) || !Double.isFinite(edgeTimeS)) {
-            throw new IllegalArgumentException("edge time must be finite and >= 0, got " + edgeTimeS);
-        }
+        new WorstCasePerAmpere(droopOhms, overshootOhms, edgeTimeS); // the same checks of the figures
         java.util.Objects.requireNonNull(droopPattern, "droopPattern");
         java.util.Objects.requireNonNull(overshootPattern, "overshootPattern");
     }
