@@ -11,6 +11,10 @@ import java.util.List;
  * n_p then has Y_board = Y_fixed + Σ n_p·Y₁,p, which is exact: n identical branches in parallel have n
  * times the admittance of one (docs/network-model.md#the-fast-per-part-engine). Results agree with {@link PowerNetwork#impedance} to
  * rounding (tested).
+ *
+ * <p>With placement regions (docs/network-model.md#placement-regions) each candidate belongs to one region of
+ * the fixed network, or to the board node: a region's node sums its parts in the same way, Y_r = Y_r,fixed +
+ * Σ n_p·Y₁,p, and reaches the board node through its spreading path, y = Y_r/(1 + Y_r·(R_r + jωL_r)).
  */
 public final class ImpedanceEngine {
     private final FrequencyGrid grid;
@@ -25,6 +29,16 @@ public final class ImpedanceEngine {
     /** [part][frequency] admittance of a single part. */
     private final double[][] unitRe;
     private final double[][] unitIm;
+    /** Candidate p's region (index into the fixed network's regions), or −1 for the board node. */
+    private final int[] regionOf;
+    private final int regionCount;
+    /** [region][frequency] spreading path impedance R_r + jωL_r, and the region's fixed admittance. */
+    private final double[][] pathRe;
+    private final double[][] pathIm;
+    private final double[][] fixedRegionRe;
+    private final double[][] fixedRegionIm;
+    private final double[] scratchRe;
+    private final double[] scratchIm;
 
     /**
      * @param fixedNetwork the network with an empty bank (regulator, plane, package, die)
@@ -32,6 +46,36 @@ public final class ImpedanceEngine {
      * @param grid         frequencies to sweep
      */
     public ImpedanceEngine(PowerNetwork fixedNetwork, List<SeriesBranch> unitParts, FrequencyGrid grid) {
+        this(fixedNetwork, unitParts, new int[unitParts.size()], grid, true);
+    }
+
+    /**
+     * @param fixedNetwork the network with an empty bank; its regions (each maybe empty) give the paths
+     * @param unitParts    one branch per candidate, for a single part (count 1)
+     * @param regionOf     per candidate, the index of its region in {@code fixedNetwork.regions()}, or −1 for
+     *                     the board node
+     * @param grid         frequencies to sweep
+     */
+    public ImpedanceEngine(PowerNetwork fixedNetwork, List<SeriesBranch> unitParts, int[] regionOf, FrequencyGrid grid) {
+        this(fixedNetwork, unitParts, regionOf.clone(), grid, false);
+    }
+
+    private ImpedanceEngine(PowerNetwork fixedNetwork, List<SeriesBranch> unitParts, int[] regionOf, FrequencyGrid grid,
+                            boolean boardOnly) {
+        if (regionOf.length != unitParts.size()) {
+            throw new IllegalArgumentException("one region per candidate expected");
+        }
+        if (boardOnly) {
+            java.util.Arrays.fill(regionOf, -1);
+        }
+        List<RegionPath> regions = fixedNetwork.regions();
+        for (int r : regionOf) {
+            if (r < -1 || r >= regions.size()) {
+                throw new IllegalArgumentException("no region " + r + " in the network");
+            }
+        }
+        this.regionOf = regionOf;
+        this.regionCount = regions.size();
         this.grid = grid;
         this.parts = unitParts.size();
         this.hasPackage = fixedNetwork.hasPackage();
@@ -44,7 +88,26 @@ public final class ImpedanceEngine {
         fixedLoadIm = new double[n];
         unitRe = new double[parts][n];
         unitIm = new double[parts][n];
+        pathRe = new double[regionCount][n];
+        pathIm = new double[regionCount][n];
+        fixedRegionRe = new double[regionCount][n];
+        fixedRegionIm = new double[regionCount][n];
+        scratchRe = new double[regionCount];
+        scratchIm = new double[regionCount];
         double[] y = new double[2];
+        for (int k = 0; k < n; k++) {
+            double wk = 2 * Math.PI * grid.at(k);
+            for (int r = 0; r < regionCount; r++) {
+                RegionPath path = regions.get(r);
+                pathRe[r][k] = path.resistanceOhms();
+                pathIm[r][k] = wk * path.inductanceH();
+                for (SeriesBranch b : path.branches()) {
+                    b.admittance(wk, y);
+                    fixedRegionRe[r][k] += y[0];
+                    fixedRegionIm[r][k] += y[1];
+                }
+            }
+        }
         for (int k = 0; k < n; k++) {
             double w = 2 * Math.PI * grid.at(k);
             double r = fixedNetwork.regulatorResistanceOhms();
@@ -95,11 +158,45 @@ public final class ImpedanceEngine {
         for (int k = 0; k < n; k++) {
             double yr = fixedBoardRe[k];
             double yi = fixedBoardIm[k];
-            for (int p = 0; p < parts; p++) {
-                int c = counts[p];
-                if (c != 0) {
-                    yr += c * unitRe[p][k];
-                    yi += c * unitIm[p][k];
+            if (regionCount == 0) {
+                for (int p = 0; p < parts; p++) {
+                    int c = counts[p];
+                    if (c != 0) {
+                        yr += c * unitRe[p][k];
+                        yi += c * unitIm[p][k];
+                    }
+                }
+            } else {
+                for (int r = 0; r < regionCount; r++) {
+                    scratchRe[r] = fixedRegionRe[r][k];
+                    scratchIm[r] = fixedRegionIm[r][k];
+                }
+                for (int p = 0; p < parts; p++) {
+                    int c = counts[p];
+                    if (c != 0) {
+                        int r = regionOf[p];
+                        if (r < 0) {
+                            yr += c * unitRe[p][k];
+                            yi += c * unitIm[p][k];
+                        } else {
+                            scratchRe[r] += c * unitRe[p][k];
+                            scratchIm[r] += c * unitIm[p][k];
+                        }
+                    }
+                }
+                for (int r = 0; r < regionCount; r++) {
+                    double gr = scratchRe[r];
+                    double gi = scratchIm[r];
+                    if (gr == 0.0 && gi == 0.0) {
+                        continue;
+                    }
+                    double qr = pathRe[r][k];
+                    double qi = pathIm[r][k];
+                    double dr = 1 + gr * qr - gi * qi;
+                    double di = gr * qi + gi * qr;
+                    double md = dr * dr + di * di;
+                    yr += (gr * dr + gi * di) / md;
+                    yi += (gi * dr - gr * di) / md;
                 }
             }
             double m = yr * yr + yi * yi;

@@ -8,10 +8,14 @@ import java.util.Objects;
  * <pre>
  * regulator ─ R_reg ─ L_reg ─┬─ board node ─ R_pkg ─ L_pkg ─┬─ load node
  *                            │                               │
- *                       boardBranches                   loadBranches
+ *                            ├─ boardBranches           loadBranches
+ *                            └─ R_r ─ L_r ─ region node ─ its branches   (per region)
  * </pre>
  * The regulator's far end is AC ground. Without a package the load node is the board node and
- * {@code loadBranches} is empty (the die, if any, is then one of the board branches).
+ * {@code loadBranches} is empty (the die, if any, is then one of the board branches). Regions
+ * (docs/network-model.md#placement-regions) hang off the board node through their spreading paths; a
+ * region with no branches carries no current and is left out of every computation, and a region whose
+ * path is a short (R = L = 0) is the board node itself ({@link #boardNodeBranches}).
  *
  * @param regulatorResistanceOhms R_reg &ge; 0
  * @param regulatorInductanceH    L_reg &ge; 0 (not both zero)
@@ -20,6 +24,8 @@ import java.util.Objects;
  * @param packageResistanceOhms   R_pkg &ge; 0
  * @param packageInductanceH      L_pkg &ge; 0
  * @param loadBranches            shunt branches at the load node (the die); empty without a package
+ * @param regions                 placement regions behind their spreading paths (empty: every part on the
+ *                                board node, as {@code boardBranches})
  */
 public record PowerNetwork(
         double regulatorResistanceOhms,
@@ -28,11 +34,21 @@ public record PowerNetwork(
         boolean hasPackage,
         double packageResistanceOhms,
         double packageInductanceH,
-        List<SeriesBranch> loadBranches) {
+        List<SeriesBranch> loadBranches,
+        List<RegionPath> regions) {
+
+    /** A network without placement regions: every shunt branch at the board or load node. */
+    public PowerNetwork(double regulatorResistanceOhms, double regulatorInductanceH, List<SeriesBranch> boardBranches,
+                        boolean hasPackage, double packageResistanceOhms, double packageInductanceH,
+                        List<SeriesBranch> loadBranches) {
+        this(regulatorResistanceOhms, regulatorInductanceH, boardBranches, hasPackage, packageResistanceOhms,
+                packageInductanceH, loadBranches, List.of());
+    }
 
     public PowerNetwork {
         boardBranches = List.copyOf(boardBranches);
         loadBranches = List.copyOf(loadBranches);
+        regions = List.copyOf(regions);
         if (!(regulatorResistanceOhms >= 0) || !(regulatorInductanceH >= 0)
                 || (regulatorResistanceOhms == 0 && regulatorInductanceH == 0)) {
             throw new IllegalArgumentException("regulator needs R >= 0, L >= 0, not both zero");
@@ -48,6 +64,31 @@ public record PowerNetwork(
     }
 
     /**
+     * Every branch electrically at the board node: {@code boardBranches}, then the branches of each region
+     * whose path is a short (R = L = 0), in region order.
+     */
+    public List<SeriesBranch> boardNodeBranches() {
+        if (regions.isEmpty()) {
+            return boardBranches;
+        }
+        java.util.ArrayList<SeriesBranch> all = new java.util.ArrayList<>(boardBranches);
+        for (RegionPath r : regions) {
+            if (r.isShort()) {
+                all.addAll(r.branches());
+            }
+        }
+        return List.copyOf(all);
+    }
+
+    /** The regions behind a real spreading path (R or L &gt; 0) that hold at least one branch. */
+    public List<RegionPath> spreadRegions() {
+        if (regions.isEmpty()) {
+            return regions;
+        }
+        return regions.stream().filter(r -> !r.isShort() && !r.branches().isEmpty()).toList();
+    }
+
+    /**
      * Resistance at DC, Z(0) = R_reg + R_pkg: every shunt branch holds a capacitor, so no DC current
      * flows in it (docs/network-model.md#dc-and-summing-admittances).
      */
@@ -60,16 +101,19 @@ public record PowerNetwork(
      * load node. Then Z(∞) is the parallel combination of those branches' resistances.
      */
     public boolean hasFiniteHighFrequencyLimit() {
-        boolean boardFinite = regulatorInductanceH == 0.0 || boardBranches.stream().anyMatch(b -> b.inductanceH() == 0.0);
+        boolean boardFinite = regulatorInductanceH == 0.0
+                || boardNodeBranches().stream().anyMatch(b -> b.inductanceH() == 0.0)
+                || spreadRegions().stream().anyMatch(r -> r.inductanceH() == 0.0
+                        && r.branches().stream().anyMatch(b -> b.inductanceH() == 0.0));
         if (!hasPackage) {
             return boardFinite;
         }
         return loadBranches.stream().anyMatch(b -> b.inductanceH() == 0.0) || (packageInductanceH == 0.0 && boardFinite);
     }
 
-    /** The branches directly at the load node (the board's when there is no package). */
+    /** The branches directly at the load node (the board node's when there is no package). */
     public List<SeriesBranch> loadNodeBranches() {
-        return hasPackage ? loadBranches : boardBranches;
+        return hasPackage ? loadBranches : boardNodeBranches();
     }
 
     /**
@@ -98,10 +142,27 @@ public record PowerNetwork(
             yr += r / m;
             yi += -x / m;
         }
-        for (SeriesBranch b : boardBranches) {
+        for (SeriesBranch b : boardNodeBranches()) {
             b.admittance(w, y);
             yr += y[0];
             yi += y[1];
+        }
+        for (RegionPath r : spreadRegions()) {
+            // the region's node admittance Y_r behind its path Q = R + jωL: y = Y_r / (1 + Y_r·Q)
+            double gr = 0;
+            double gi = 0;
+            for (SeriesBranch b : r.branches()) {
+                b.admittance(w, y);
+                gr += y[0];
+                gi += y[1];
+            }
+            double qr = r.resistanceOhms();
+            double qi = w * r.inductanceH();
+            double dr = 1 + gr * qr - gi * qi;
+            double di = gr * qi + gi * qr;
+            double md = dr * dr + di * di;
+            yr += (gr * dr + gi * di) / md;
+            yi += (gi * dr - gr * di) / md;
         }
         double zr;
         double zi;

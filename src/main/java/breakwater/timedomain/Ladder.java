@@ -14,6 +14,8 @@ import java.util.List;
  * <li>package path R_p + sL_p in series with the board node (admittance Y_b):
  *     y = Y_b/(1 + Y_b·Q), Q = R_p + sL_p, y' = (Y_b' − Y_b²·L_p)/(1 + Y_b·Q)²
  *     (well defined also where Y_b = 0).</li>
+ * <li>each placement region behind its spreading path R_r + sL_r (docs/network-model.md#placement-regions),
+ *     in the same form with the region node's admittance Y_r in place of Y_b; added at the board node.</li>
  * </ul>
  * Complex numbers are pairs of doubles; nothing is allocated per evaluation.
  */
@@ -30,6 +32,14 @@ final class Ladder {
     final double[] lR;
     final double[] lL;
     final double[] lC;
+    /** Spreading paths of the regions behind one (short paths are folded into the board node). */
+    final double[] rR;
+    final double[] rL;
+    /** Region k's branches are rbR/rbL/rbC[rStart[k] … rStart[k+1]). */
+    final int[] rStart;
+    final double[] rbR;
+    final double[] rbL;
+    final double[] rbC;
 
     // results of the last eval(): Y, Y', and the scale Σ(|Re y_i| + |Im y_i|) of the terms summed at the load node
     double yr;
@@ -45,7 +55,7 @@ final class Ladder {
         pkg = n.hasPackage();
         pkgR = n.packageResistanceOhms();
         pkgL = n.packageInductanceH();
-        List<SeriesBranch> b = n.boardBranches();
+        List<SeriesBranch> b = n.boardNodeBranches();
         bR = new double[b.size()];
         bL = new double[b.size()];
         bC = new double[b.size()];
@@ -62,6 +72,30 @@ final class Ladder {
             lR[k] = l.get(k).resistanceOhms();
             lL[k] = l.get(k).inductanceH();
             lC[k] = l.get(k).capacitanceF();
+        }
+        List<breakwater.network.RegionPath> regions = n.spreadRegions();
+        rR = new double[regions.size()];
+        rL = new double[regions.size()];
+        rStart = new int[regions.size() + 1];
+        int total = 0;
+        for (int k = 0; k < regions.size(); k++) {
+            rR[k] = regions.get(k).resistanceOhms();
+            rL[k] = regions.get(k).inductanceH();
+            rStart[k] = total;
+            total += regions.get(k).branches().size();
+        }
+        rStart[regions.size()] = total;
+        rbR = new double[total];
+        rbL = new double[total];
+        rbC = new double[total];
+        int j = 0;
+        for (breakwater.network.RegionPath r : regions) {
+            for (SeriesBranch x : r.branches()) {
+                rbR[j] = x.resistanceOhms();
+                rbL[j] = x.inductanceH();
+                rbC[j] = x.capacitanceF();
+                j++;
+            }
         }
     }
 
@@ -86,7 +120,10 @@ final class Ladder {
         acc[2] = dbr;
         acc[3] = dbi;
         acc[4] = sc;
-        addBranches(bR, bL, bC, sr, si, s2r, s2i, acc);
+        addBranches(bR, bL, bC, 0, bR.length, sr, si, s2r, s2i, acc);
+        for (int k = 0; k < rR.length; k++) {
+            addRegion(k, sr, si, s2r, s2i);
+        }
         if (!pkg) {
             yr = acc[0];
             yi = acc[1];
@@ -122,7 +159,7 @@ final class Ladder {
         acc[3] = dpi;
         // the path's rounding scale is the board node's (its terms cancel where Y_b = 0), divided by |den|
         acc[4] = acc[4] * Math.sqrt(md);
-        addBranches(lR, lL, lC, sr, si, s2r, s2i, acc);
+        addBranches(lR, lL, lC, 0, lR.length, sr, si, s2r, s2i, acc);
         yr = acc[0];
         yi = acc[1];
         dr = acc[2];
@@ -130,14 +167,43 @@ final class Ladder {
         scale = acc[4];
     }
 
-    private static void addBranches(double[] R, double[] L, double[] C, double sr, double si,
+    private final double[] region = new double[5];
+
+    /**
+     * Adds region k behind its path Q = R_r + sL_r to the board node's sums in {@code acc}:
+     * y = Y_r/(1 + Y_r·Q), y' = (Y_r' − Y_r²·L_r)/(1 + Y_r·Q)², as for the package path.
+     */
+    private void addRegion(int k, double sr, double si, double s2r, double s2i) {
+        double[] g = region;
+        java.util.Arrays.fill(g, 0.0);
+        addBranches(rbR, rbL, rbC, rStart[k], rStart[k + 1], sr, si, s2r, s2i, g);
+        double Yr = g[0];
+        double Yi = g[1];
+        double Qr = rR[k] + rL[k] * sr;
+        double Qi = rL[k] * si;
+        double denr = 1 + Yr * Qr - Yi * Qi;
+        double deni = Yr * Qi + Yi * Qr;
+        double md = 1.0 / (denr * denr + deni * deni);
+        double nr = g[2] - rL[k] * (Yr * Yr - Yi * Yi);
+        double ni = g[3] - rL[k] * (2 * Yr * Yi);
+        double d2r = denr * denr - deni * deni;
+        double d2i = 2 * denr * deni;
+        double md2 = md * md;
+        acc[0] += (Yr * denr + Yi * deni) * md;
+        acc[1] += (Yi * denr - Yr * deni) * md;
+        acc[2] += (nr * d2r + ni * d2i) * md2;
+        acc[3] += (ni * d2r - nr * d2i) * md2;
+        acc[4] += g[4] * Math.sqrt(md);
+    }
+
+    private static void addBranches(double[] R, double[] L, double[] C, int from, int to, double sr, double si,
                                     double s2r, double s2i, double[] acc) {
         double ar = acc[0];
         double ai = acc[1];
         double br = acc[2];
         double bi = acc[3];
         double sc = acc[4];
-        for (int k = 0; k < R.length; k++) {
+        for (int k = from; k < to; k++) {
             double c = C[k];
             double rc = R[k] * c;
             double lc = L[k] * c;

@@ -44,15 +44,35 @@ final class PencilEigenvalues {
      * Finite eigenvalues of the descriptor pencil (A, E) as first guesses: interleaved re/im pairs.
      */
     static double[] candidatePoles(PowerNetwork net) {
-        List<SeriesBranch> board = net.boardBranches();
+        List<SeriesBranch> board = net.boardNodeBranches();
         List<SeriesBranch> load = net.loadBranches();
+        List<breakwater.network.RegionPath> regions = net.spreadRegions();
         boolean pkg = net.hasPackage();
         int iVb = 0;
         int idx = 1;
         int iVl = pkg ? idx++ : iVb;
         int iReg = idx++;
         int iPkg = pkg ? idx++ : -1;
-        int nb = board.size() + load.size();
+        // per region: its node voltage and its path current (board node → region node)
+        int[] iVr = new int[regions.size()];
+        int[] iPath = new int[regions.size()];
+        for (int r = 0; r < regions.size(); r++) {
+            iVr[r] = idx++;
+            iPath[r] = idx++;
+        }
+        List<SeriesBranch> all = new java.util.ArrayList<>(board);
+        List<Integer> nodeOf = new java.util.ArrayList<>(java.util.Collections.nCopies(board.size(), iVb));
+        for (SeriesBranch b : load) {
+            all.add(b);
+            nodeOf.add(iVl);
+        }
+        for (int r = 0; r < regions.size(); r++) {
+            for (SeriesBranch b : regions.get(r).branches()) {
+                all.add(b);
+                nodeOf.add(iVr[r]);
+            }
+        }
+        int nb = all.size();
         int[] iI = new int[nb];
         int[] iV = new int[nb];
         for (int k = 0; k < nb; k++) {
@@ -78,9 +98,19 @@ final class PencilEigenvalues {
             a[iPkg][iVb] = -1;
             a[iPkg][iPkg] = -net.packageResistanceOhms();
         }
+        // region paths: L_r i' = Vb − Vr − R_r i, the current leaving the board node and entering the region's
+        for (int r = 0; r < regions.size(); r++) {
+            int p = iPath[r];
+            e[p] = regions.get(r).inductanceH();
+            a[p][iVb] = 1;
+            a[p][iVr[r]] = -1;
+            a[p][p] = -regions.get(r).resistanceOhms();
+            a[iVb][p] = -1;
+            a[iVr[r]][p] = 1;
+        }
         for (int k = 0; k < nb; k++) {
-            SeriesBranch b = k < board.size() ? board.get(k) : load.get(k - board.size());
-            int node = k < board.size() ? iVb : iVl;
+            SeriesBranch b = all.get(k);
+            int node = nodeOf.get(k);
             a[node][iI[k]] = -1;
             e[iI[k]] = b.inductanceH();
             a[iI[k]][node] = 1;
@@ -158,8 +188,19 @@ final class PencilEigenvalues {
         double cSum = 0;
         double rMin = Double.POSITIVE_INFINITY;
         double rMax = 0;
-        double[] ls = {net.regulatorInductanceH(), net.packageInductanceH()};
-        double[] rs = {net.regulatorResistanceOhms(), net.packageResistanceOhms()};
+        List<breakwater.network.RegionPath> regions = net.spreadRegions();
+        double[] ls = new double[2 + regions.size()];
+        double[] rs = new double[2 + regions.size()];
+        ls[0] = net.regulatorInductanceH();
+        ls[1] = net.packageInductanceH();
+        rs[0] = net.regulatorResistanceOhms();
+        rs[1] = net.packageResistanceOhms();
+        List<List<SeriesBranch>> lists = new java.util.ArrayList<>(List.of(net.boardNodeBranches(), net.loadBranches()));
+        for (int r = 0; r < regions.size(); r++) {
+            ls[2 + r] = regions.get(r).inductanceH();
+            rs[2 + r] = regions.get(r).resistanceOhms();
+            lists.add(regions.get(r).branches());
+        }
         for (double l : ls) {
             if (l > 0) {
                 lMin = Math.min(lMin, l);
@@ -172,7 +213,7 @@ final class PencilEigenvalues {
                 rMax = Math.max(rMax, r);
             }
         }
-        for (List<SeriesBranch> list : List.of(net.boardBranches(), net.loadBranches())) {
+        for (List<SeriesBranch> list : lists) {
             for (SeriesBranch b : list) {
                 if (b.inductanceH() > 0) {
                     lMin = Math.min(lMin, b.inductanceH());

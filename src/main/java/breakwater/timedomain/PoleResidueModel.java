@@ -277,12 +277,37 @@ public final class PoleResidueModel {
             aB += 1 / net.regulatorInductanceH();
             bB -= net.regulatorResistanceOhms() / sq(net.regulatorInductanceH());
         }
-        for (SeriesBranch b : net.boardBranches()) {
+        for (SeriesBranch b : net.boardNodeBranches()) {
             if (b.inductanceH() == 0) {
                 gB += 1 / b.resistanceOhms();
             } else {
                 aB += 1 / b.inductanceH();
                 bB -= b.resistanceOhms() / sq(b.inductanceH());
+            }
+        }
+        // a region behind its path R_r + sL_r: its node's expansion, then the path in series, as for the package
+        for (breakwater.network.RegionPath r : net.spreadRegions()) {
+            double gR = 0;
+            double aR = 0;
+            double bR = 0;
+            for (SeriesBranch b : r.branches()) {
+                if (b.inductanceH() == 0) {
+                    gR += 1 / b.resistanceOhms();
+                } else {
+                    aR += 1 / b.inductanceH();
+                    bR -= b.resistanceOhms() / sq(b.inductanceH());
+                }
+            }
+            boolean regionFinite = gR > 0;
+            if (r.inductanceH() == 0 && regionFinite) {
+                gB += 1 / (r.resistanceOhms() + 1 / gR);
+            } else {
+                double lR = regionFinite ? 0 : 1 / aR;
+                double dR = regionFinite ? 1 / gR : -bR * lR * lR;
+                double lp = r.inductanceH() + lR;
+                double dp = r.resistanceOhms() + dR;
+                aB += 1 / lp;
+                bB -= dp / sq(lp);
             }
         }
         boolean boardFinite = gB > 0;

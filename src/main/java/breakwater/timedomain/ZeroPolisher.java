@@ -315,20 +315,30 @@ final class ZeroPolisher {
      * Two networks with equal structures have the same degree.
      */
     static long[] structure(PowerNetwork net) {
-        List<SeriesBranch> board = net.boardBranches();
-        List<SeriesBranch> load = net.loadBranches();
-        int n = board.size() + load.size();
-        long[] s = new long[2 + (n * 3 + 63) / 64];
-        s[0] = ((long) board.size() << 32) | load.size();
+        List<SeriesBranch> all = new java.util.ArrayList<>(net.boardNodeBranches());
+        all.addAll(net.loadBranches());
+        List<breakwater.network.RegionPath> regions = net.spreadRegions();
+        for (breakwater.network.RegionPath r : regions) {
+            all.addAll(r.branches());
+        }
+        int n = all.size();
+        long[] s = new long[3 + regions.size() + (n * 3 + 63) / 64];
+        s[0] = ((long) net.boardNodeBranches().size() << 32) | net.loadBranches().size();
         s[1] = (net.hasPackage() ? 1 : 0) | (net.regulatorInductanceH() > 0 ? 2 : 0)
                 | (net.regulatorResistanceOhms() > 0 ? 4 : 0) | (net.packageInductanceH() > 0 ? 8 : 0)
                 | (net.packageResistanceOhms() > 0 ? 16 : 0);
+        s[2] = regions.size();
+        for (int r = 0; r < regions.size(); r++) {
+            breakwater.network.RegionPath p = regions.get(r);
+            s[3 + r] = ((long) p.branches().size() << 2) | (p.inductanceH() > 0 ? 2 : 0) | (p.resistanceOhms() > 0 ? 1 : 0);
+        }
         int bit = 0;
+        int base = 3 + regions.size();
         for (int k = 0; k < n; k++) {
-            SeriesBranch b = k < board.size() ? board.get(k) : load.get(k - board.size());
+            SeriesBranch b = all.get(k);
             long flags = (b.resistanceOhms() > 0 ? 1 : 0) | (b.inductanceH() > 0 ? 2 : 0)
                     | (b.capacitanceF() > 0 ? 4 : 0);
-            s[2 + bit / 64] |= flags << (bit % 64);
+            s[base + bit / 64] |= flags << (bit % 64);
             bit += 3;
         }
         return s;

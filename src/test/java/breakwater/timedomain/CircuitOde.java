@@ -14,6 +14,9 @@ import java.util.List;
  * inductance-free branches), integrated by Commons Math's Dormand–Prince 8(5,3) integrator.
  * Needs at least one inductance-free branch with R &gt; 0 at each node (plane and die), and inductance in
  * the regulator and package. The load draws u(t) amperes; the output is the voltage drop Z∗u at the load.
+ * Placement regions behind a spreading path need inductance in the path and in every branch there: the
+ * region node's voltage then follows from the path and branch currents' derivatives summing to zero
+ * (KCL differentiated), V_r·(1/L_r + Σ 1/L_k) = (V_b − R_r·i_r)/L_r + Σ (R_k·i_k + v_Ck)/L_k.
  */
 final class CircuitOde implements FirstOrderDifferentialEquations {
 
@@ -22,6 +25,8 @@ final class CircuitOde implements FirstOrderDifferentialEquations {
 
     private final PowerNetwork net;
     private final List<Br> branches = new ArrayList<>();
+    private final List<breakwater.network.RegionPath> regions;
+    private final int regionBase;
     private final int dim;
     // u(t) on the current segment: u0 + slope·(t − t0)
     private double segT0;
@@ -33,7 +38,7 @@ final class CircuitOde implements FirstOrderDifferentialEquations {
         if (net.regulatorInductanceH() == 0 || (net.hasPackage() && net.packageInductanceH() == 0)) {
             throw new IllegalArgumentException("reference ODE needs inductance in regulator and package");
         }
-        for (SeriesBranch b : net.boardBranches()) {
+        for (SeriesBranch b : net.boardNodeBranches()) {
             branches.add(new Br(b.resistanceOhms(), b.inductanceH(), b.capacitanceF(), !net.hasPackage()));
         }
         for (SeriesBranch b : net.loadBranches()) {
@@ -42,6 +47,14 @@ final class CircuitOde implements FirstOrderDifferentialEquations {
         int d = 1 + (net.hasPackage() ? 1 : 0);
         for (Br b : branches) {
             d += b.l() > 0 ? 2 : 1;
+        }
+        regions = net.spreadRegions();
+        regionBase = d;
+        for (breakwater.network.RegionPath r : regions) {
+            if (r.inductanceH() == 0 || r.branches().stream().anyMatch(b -> b.inductanceH() == 0)) {
+                throw new IllegalArgumentException("reference ODE needs inductance in each region's path and parts");
+            }
+            d += 1 + 2 * r.branches().size();
         }
         dim = d;
     }
@@ -69,6 +82,11 @@ final class CircuitOde implements FirstOrderDifferentialEquations {
         double gB = 0;
         double sB = 0;
         double inB = -iReg + (pkg ? iPkg : -load);
+        int at = regionBase;
+        for (breakwater.network.RegionPath r : regions) {
+            inB -= y[at];
+            at += 1 + 2 * r.branches().size();
+        }
         double gL = 0;
         double sL = 0;
         double inL = pkg ? -load - iPkg : 0;
@@ -127,6 +145,26 @@ final class CircuitOde implements FirstOrderDifferentialEquations {
                 yDot[idx] = (vn - vc) / b.r() / b.c();
                 idx += 1;
             }
+        }
+        for (breakwater.network.RegionPath r : regions) {
+            double ip = y[idx];
+            double gSum = 1 / r.inductanceH();
+            double num = (vb - r.resistanceOhms() * ip) / r.inductanceH();
+            int j = idx + 1;
+            for (SeriesBranch b : r.branches()) {
+                gSum += 1 / b.inductanceH();
+                num += (b.resistanceOhms() * y[j] + y[j + 1]) / b.inductanceH();
+                j += 2;
+            }
+            double vr = num / gSum;
+            yDot[idx] = (vb - vr - r.resistanceOhms() * ip) / r.inductanceH();
+            j = idx + 1;
+            for (SeriesBranch b : r.branches()) {
+                yDot[j] = (vr - b.resistanceOhms() * y[j] - y[j + 1]) / b.inductanceH();
+                yDot[j + 1] = y[j] / b.capacitanceF();
+                j += 2;
+            }
+            idx = j;
         }
     }
 

@@ -25,9 +25,10 @@ import java.util.Optional;
  *
  * <p>Ports: {@value #LOAD} and {@value #GROUND}. Node names: {@value #REGULATOR} (the source's
  * terminal), {@value #BOARD} (the bank's node, when a package separates it from the load), {@value #LOAD};
- * inside a branch {@code TAG_l} and {@code TAG_c}. A further node with its own series path to the board
- * node (a region of placement, say) is one more {@link SpiceNetlist#series} from {@value #BOARD} to the
- * new node, then its branches as {@link #shunt}s at that node.
+ * inside a branch {@code TAG_l} and {@code TAG_c}; a placement region behind a spreading path
+ * (docs/network-model.md#placement-regions) is its path {@code pathK} from the board node to its own
+ * node {@code regionK}, then its branches as {@link #shunt}s there (a region with a short path puts its
+ * branches on the board node).
  */
 final class RailNetlist {
     static final String SUBCIRCUIT = "rail";
@@ -70,6 +71,33 @@ final class RailNetlist {
             } else {
                 otherNo++;
                 shunt(n, describeOther(n, b, "s" + otherNo), boardNode, b);
+            }
+        }
+        int regionNo = 0;
+        for (breakwater.network.RegionPath r : network.regions()) {
+            if (r.branches().isEmpty()) {
+                continue;
+            }
+            regionNo++;
+            String node = r.isShort() ? boardNode : "region" + regionNo;
+            if (r.isShort()) {
+                n.comment("Region " + r.name() + ": no spreading path (R = L = 0), its parts sit at the board node:");
+            } else {
+                n.comment("Region " + r.name() + " (node " + node + "): spreading path from the board node, R = "
+                        + SpiceNetlist.number(r.resistanceOhms()) + " Ohm, L = " + SpiceNetlist.number(r.inductanceH())
+                        + " H, then its parts:");
+                n.series("path" + regionNo, boardNode, node, r.resistanceOhms(), r.inductanceH(), 0);
+            }
+            for (SeriesBranch b : r.branches()) {
+                Optional<BankEntry> part = partOf(b, bank, footprint);
+                if (part.isPresent()) {
+                    partNo++;
+                    describePart(n, "b" + partNo, part.get(), footprint, footprintName);
+                    shunt(n, "b" + partNo, node, b);
+                } else {
+                    otherNo++;
+                    shunt(n, describeOther(n, b, "s" + otherNo), node, b);
+                }
             }
         }
         if (network.hasPackage()) {

@@ -1,0 +1,36 @@
+package breakwater.network;
+
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * A placement region (docs/network-model.md#placement-regions): the parts placed there, behind the plane's
+ * spreading path R + sL from the board node (where the package connects) to the region's own node.
+ * A region with R = L = 0 is the board node itself.
+ *
+ * @param name           the region's name in the scenario, for reports and exported decks
+ * @param resistanceOhms spreading resistance to the board node, &ge; 0
+ * @param inductanceH    spreading inductance to the board node, &ge; 0
+ * @param branches       shunt branches at the region's node (one per part type placed there)
+ */
+public record RegionPath(String name, double resistanceOhms, double inductanceH, List<SeriesBranch> branches) {
+
+    public RegionPath {
+        Objects.requireNonNull(name, "name");
+        branches = List.copyOf(branches);
+        if (!(resistanceOhms >= 0) || !Double.isFinite(resistanceOhms)
+                || !(inductanceH >= 0) || !Double.isFinite(inductanceH)) {
+            throw new IllegalArgumentException("region " + name + ": spreading R and L must be finite and >= 0");
+        }
+    }
+
+    /** Whether the path is a short (R = L = 0): its branches then sit on the board node itself. */
+    public boolean isShort() {
+        return resistanceOhms == 0.0 && inductanceH == 0.0;
+    }
+
+    /** The same path holding {@code newBranches}. */
+    public RegionPath withBranches(List<SeriesBranch> newBranches) {
+        return new RegionPath(name, resistanceOhms, inductanceH, newBranches);
+    }
+}
