@@ -186,6 +186,42 @@ class RegionNetworkTest {
                 .isLessThan(ideal.droopOhms());
     }
 
+    /**
+     * The solver's warm start (a neighbour's poles as Newton's starting points) on regional networks gives
+     * the eigenvalue search's model, as {@link WarmStartTest} holds for the single-node network.
+     */
+    @Test
+    void warmStartOnNeighbouringPlacedBanksEqualsTheEigenvalueSearch() {
+        Random rnd = new Random(77);
+        int warm = 0;
+        int trials = 0;
+        for (int t = 0; t < 60; t++) {
+            PowerNetwork a = randomWithRegions(rnd);
+            PoleResidueModel hint = PoleResidueModel.of(a);
+            int r = rnd.nextInt(a.regions().size());
+            if (a.regions().get(r).branches().isEmpty()) {
+                continue;
+            }
+            List<SeriesBranch> branches = new ArrayList<>(a.regions().get(r).branches());
+            int k = rnd.nextInt(branches.size());
+            SeriesBranch old = branches.get(k);
+            double f = rnd.nextBoolean() ? 1.25 : 0.8; // one part more or fewer of five
+            branches.set(k, new SeriesBranch(old.label(), old.resistanceOhms() / f, old.inductanceH() / f,
+                    old.capacitanceF() * f));
+            List<RegionPath> regions = new ArrayList<>(a.regions());
+            regions.set(r, regions.get(r).withBranches(branches));
+            PowerNetwork b = new PowerNetwork(a.regulatorResistanceOhms(), a.regulatorInductanceH(), a.boardBranches(),
+                    a.hasPackage(), a.packageResistanceOhms(), a.packageInductanceH(), a.loadBranches(), regions);
+            PoleResidueModel m = hint.near(b);
+            trials++;
+            if (m.warmStarted()) {
+                warm++;
+            }
+            WarmStartTest.assertSameModel(m, PoleResidueModel.of(b));
+        }
+        assertThat(warm).isGreaterThan(trials / 2);
+    }
+
     /** {@link Networks#moderate()} with its parts in two regions behind inductive paths. */
     static PowerNetwork moderateWithRegions() {
         PowerNetwork m = Networks.moderate();
