@@ -17,7 +17,8 @@ import java.util.Optional;
 
 /**
  * Reads a bank file (CSV, docs/file-contracts.md#bank-csv): a header row {@code part,count} (any case, any order), then one
- * row per part of the catalog with how many of it are placed. {@code #} lines are comments. Rows with
+ * row per part of the catalog with how many of it are placed; with placement regions an optional
+ * {@code region} column says where (one row per part and region). {@code #} lines are comments. Rows with
  * count 0 are accepted and dropped. Breakwater's own {@code bom.csv} reads back as a bank: its columns
  * {@code description, case, unit_cost, extended_cost} are ignored and its {@code TOTAL} row skipped.
  *
@@ -28,6 +29,8 @@ import java.util.Optional;
 public final class BankFileReader {
 
     private static final List<String> COLUMNS = List.of("part", "count");
+    /** The optional column naming each row's placement region (docs/network-model.md#placement-regions). */
+    static final String REGION_COLUMN = "region";
     /** The other columns of Breakwater's own bom.csv: accepted and ignored, so a BOM can be read back. */
     private static final List<String> BOM_COLUMNS = List.of("description", "case", "unit_cost", "extended_cost");
     /** The part name of bom.csv's summary row, skipped when reading a BOM back. */
@@ -45,16 +48,32 @@ public final class BankFileReader {
      */
     public static List<BankEntry> read(Path file, String displayName, Catalog catalog)
             throws InputException, IOException {
-        return parseText(TextFiles.readUtf8(file, displayName), displayName, catalog);
+        return read(file, displayName, catalog, List.of());
+    }
+
+    /**
+     * Reads the bank in {@code file} for a scenario with the placement regions {@code regions} (names in
+     * file order; empty: none). The optional {@code region} column names each row's region; a row without
+     * one goes to the only region, and is an error naming the regions when there are several.
+     */
+    public static List<BankEntry> read(Path file, String displayName, Catalog catalog, List<String> regions)
+            throws InputException, IOException {
+        return parseText(TextFiles.readUtf8(file, displayName), displayName, catalog, regions);
     }
 
     /** Reads a bank from {@code in}; see {@link #read(Path, String, Catalog)}. */
     public static List<BankEntry> parse(Reader in, String displayName, Catalog catalog)
             throws InputException, IOException {
-        return parseText(TextFiles.readAll(in), displayName, catalog);
+        return parseText(TextFiles.readAll(in), displayName, catalog, List.of());
     }
 
-    private static List<BankEntry> parseText(String text, String source, Catalog catalog)
+    /** Reads a bank from {@code in}; see {@link #read(Path, String, Catalog, List)}. */
+    public static List<BankEntry> parse(Reader in, String displayName, Catalog catalog, List<String> regions)
+            throws InputException, IOException {
+        return parseText(TextFiles.readAll(in), displayName, catalog, regions);
+    }
+
+    private static List<BankEntry> parseText(String text, String source, Catalog catalog, List<String> regions)
             throws InputException, IOException {
         Diagnostics problems = new Diagnostics();
         Optional<CsvTable> read = CsvTable.read(text, source, problems);
@@ -78,10 +97,12 @@ public final class BankFileReader {
             if (BOM_COLUMNS.contains(name)) {
                 continue;
             }
-            if (!COLUMNS.contains(name)) {
+            if (!COLUMNS.contains(name) && !name.equals(REGION_COLUMN)) {
                 Diagnostic d = Diagnostic.at(source, cell.line(), cell.column(), "unknown column '"
-                        + cell.value() + "', a bank file has exactly the columns part, count");
-                problems.add(Suggestions.closest(name, COLUMNS).map(s -> d.withHint("you meant '" + s + "'?"))
+                        + cell.value() + "', a bank file has the columns part, count and, optionally, region");
+                List<String> known = new ArrayList<>(COLUMNS);
+                known.add(REGION_COLUMN);
+                problems.add(Suggestions.closest(name, known).map(s -> d.withHint("you meant '" + s + "'?"))
                         .orElse(d));
             } else if (columns.containsKey(name)) {
                 problems.error(source, cell.line(), cell.column(), "column '" + name
@@ -101,6 +122,7 @@ public final class BankFileReader {
         int width = table.header.size();
         int partIndex = columns.get("part");
         int countIndex = columns.get("count");
+        int regionIndex = columns.getOrDefault(REGION_COLUMN, -1);
         List<BankEntry> entries = new ArrayList<>();
         Map<String, Integer> firstLine = new HashMap<>();
         for (CsvTable.Row row : table.rows) {
@@ -118,16 +140,42 @@ public final class BankFileReader {
             if (name.equals(BOM_TOTAL_ROW) && catalog.find(name).isEmpty()) {
                 continue; // the summary row of a bom.csv written by Breakwater
             }
+            String region = regionIndex < 0 ? "" : row.cell(regionIndex).value().strip();
+            CsvTable.Cell regionCell = regionIndex < 0 ? partCell : row.cell(regionIndex);
+            boolean regionOk = true;
+            if (regions.isEmpty() && !region.isEmpty()) {
+                problems.error(source, regionCell.line(), regionCell.column(), "region '" + region
+                        + "' but the scenario declares no placement regions: leave the region column empty, or"
+                        + " declare [region." + region + "] in the scenario");
+                regionOk = false;
+            } else if (!regions.isEmpty() && region.isEmpty()) {
+                if (regions.size() == 1) {
+                    region = regions.get(0);
+                } else {
+                    problems.error(source, regionCell.line(), regionCell.column(), "this row names no region, and"
+                            + " the scenario has several: " + String.join(", ", regions) + "; add a region column"
+                            + " (part,count,region) and name one on every row");
+                    regionOk = false;
+                }
+            } else if (!regions.isEmpty() && !regions.contains(region)) {
+                Diagnostic d = Diagnostic.at(source, regionCell.line(), regionCell.column(), "unknown region '"
+                        + region + "', the scenario's regions are " + String.join(", ", regions));
+                String shown = region;
+                problems.add(Suggestions.closest(shown, regions).map(s -> d.withHint("you meant '" + s + "'?")).orElse(d));
+                regionOk = false;
+            }
+            String key = region.isEmpty() ? name : name + "\u0000" + region;
             Optional<Part> part = Optional.empty();
             if (name.isEmpty()) {
                 problems.error(source, partCell.line(), partCell.column(),
                         "empty part name, every row names a part of the catalog");
-            } else if (firstLine.containsKey(name)) {
+            } else if (firstLine.containsKey(key)) {
                 problems.error(source, partCell.line(), partCell.column(), "part '" + name
-                        + "' is listed twice (first on line " + firstLine.get(name)
-                        + "), list each part once with its total count");
+                        + "' is listed twice" + (region.isEmpty() ? "" : " in region " + region) + " (first on line "
+                        + firstLine.get(key) + "), list each part once" + (region.isEmpty() ? "" : " per region")
+                        + " with its total count");
             } else {
-                firstLine.put(name, row.line());
+                firstLine.put(key, row.line());
                 part = catalog.find(name);
                 if (part.isEmpty()) {
                     Diagnostic d = Diagnostic.at(source, partCell.line(), partCell.column(), "unknown part '"
@@ -152,8 +200,8 @@ public final class BankFileReader {
                             + "' is too large, a count is at most " + Integer.MAX_VALUE);
                 }
             }
-            if (part.isPresent() && count > 0) {
-                entries.add(new BankEntry(part.get(), count));
+            if (part.isPresent() && count > 0 && regionOk) {
+                entries.add(new BankEntry(part.get(), count, region));
             }
         }
         problems.throwIfAnyInFileOrder();

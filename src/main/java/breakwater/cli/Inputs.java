@@ -39,7 +39,7 @@ record Inputs(Scenario scenario, Catalog catalog, Optional<Footprint> footprint)
 
     /** The bank in {@code file} (CSV: part,count), its parts from the catalog. */
     CapacitorBank bank(Path file) throws InputException, IOException {
-        return new CapacitorBank(BankFileReader.read(file, display(file), catalog));
+        return new CapacitorBank(BankFileReader.read(file, display(file), catalog, scenario.regionNames()));
     }
 
     /**

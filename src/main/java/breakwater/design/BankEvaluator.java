@@ -114,7 +114,7 @@ public final class BankEvaluator {
             responses.add(resonance(model, a.frequencyHz()));
         }
         return new Evaluation(bank, network, curve, metrics, CostBreakdown.of(bank, scenario.cost()),
-                BoardCheck.violations(bank, scenario.board()), model, wc, figures(network, wc), responses);
+                BoardCheck.violations(bank, scenario.board(), scenario.regions()), model, wc, figures(network, wc), responses);
     }
 
     private static ResonanceFigures resonance(PoleResidueModel model, double frequencyHz) {

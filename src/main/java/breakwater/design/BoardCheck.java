@@ -2,6 +2,7 @@ package breakwater.design;
 
 import breakwater.catalog.BankEntry;
 import breakwater.scenario.Board;
+import breakwater.scenario.Region;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -22,6 +23,36 @@ public final class BoardCheck {
         public String describe() {
             return limit + ": " + actual + " placed, " + allowed + " allowed";
         }
+    }
+
+    /**
+     * The board's limits over the whole bank, then each region's room over the parts placed there
+     * ({@code region.NAME.max_parts}, {@code region.NAME.max_per_case.CASE}; a per-case limit of 0 means that
+     * case has no room in the region).
+     */
+    public static List<Violation> violations(CapacitorBank bank, Board board, List<Region> regions) {
+        List<Violation> out = new ArrayList<>(violations(bank, board));
+        for (Region r : regions) {
+            List<BankEntry> here = bank.inRegion(r.name());
+            String prefix = "region." + r.name() + ".";
+            int placed = here.stream().mapToInt(BankEntry::count).sum();
+            r.room().maxPartsLimit().ifPresent(max -> {
+                if (placed > max) {
+                    out.add(new Violation(prefix + "max_parts", max, placed));
+                }
+            });
+            Map<String, Integer> perCase = new TreeMap<>();
+            for (BankEntry e : here) {
+                perCase.merge(e.part().caseCode(), e.count(), Integer::sum);
+            }
+            for (var limit : r.room().maxPerCase().entrySet()) {
+                int n = perCase.getOrDefault(limit.getKey(), 0);
+                if (n > limit.getValue()) {
+                    out.add(new Violation(prefix + "max_per_case." + limit.getKey(), limit.getValue(), n));
+                }
+            }
+        }
+        return out;
     }
 
     public static List<Violation> violations(CapacitorBank bank, Board board) {

@@ -71,6 +71,12 @@ public final class CandidateJudge {
      *                  (the same figures to rounding, slower: for benchmarks and cross-checks)
      */
     public CandidateJudge(BankEvaluator evaluator, List<Part> candidates, boolean warmStart) {
+        if (!evaluator.scenario().regions().isEmpty()) {
+            throw new RequestRefused("the scenario declares placement regions ([region." + evaluator.scenario()
+                    .regions().get(0).name() + "] …): check judges a placed bank (--bank FILE with a region column),"
+                    + " but solve, trim, compare and frontier do not choose regions yet; to search, use a copy of the"
+                    + " scenario without its [region.*] tables");
+        }
         this.warmStart = warmStart;
         this.evaluator = evaluator;
         this.candidates = List.copyOf(candidates);

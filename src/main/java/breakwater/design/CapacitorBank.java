@@ -9,21 +9,25 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * A bank: how many of each part are placed. Entries with count 0 are dropped; a part appears once.
+ * A bank: how many of each part are placed, and where. Entries with count 0 are dropped; a part appears
+ * once per placement region (docs/network-model.md#placement-regions; region "" without regions).
  */
 public record CapacitorBank(List<BankEntry> entries) {
 
     public CapacitorBank {
         Map<String, BankEntry> merged = new LinkedHashMap<>();
+        Map<String, BankEntry> byName = new LinkedHashMap<>();
         for (BankEntry e : entries) {
             if (e.count() == 0) {
                 continue;
             }
-            BankEntry old = merged.get(e.part().name());
-            if (old != null && !old.part().equals(e.part())) {
+            BankEntry same = byName.putIfAbsent(e.part().name(), e);
+            if (same != null && !same.part().equals(e.part())) {
                 throw new IllegalArgumentException("two different parts named " + e.part().name());
             }
-            merged.put(e.part().name(), old == null ? e : new BankEntry(e.part(), old.count() + e.count()));
+            String key = e.part().name() + '\u0000' + e.region();
+            BankEntry old = merged.get(key);
+            merged.put(key, old == null ? e : e.withCount(Math.addExact(old.count(), e.count())));
         }
         entries = List.copyOf(merged.values());
     }
@@ -44,14 +48,58 @@ public record CapacitorBank(List<BankEntry> entries) {
         return new CapacitorBank(list);
     }
 
+    /**
+     * A bank from parallel lists of parts, their regions and counts (counts may be 0): candidate i is
+     * {@code parts.get(i)} placed in {@code regions.get(i)}.
+     */
+    public static CapacitorBank of(List<Part> parts, List<String> regions, int[] counts) {
+        if (parts.size() != counts.length || regions.size() != counts.length) {
+            throw new IllegalArgumentException("parts, regions and counts differ in length");
+        }
+        List<BankEntry> list = new ArrayList<>();
+        for (int i = 0; i < counts.length; i++) {
+            if (counts[i] > 0) {
+                list.add(new BankEntry(parts.get(i), counts[i], regions.get(i)));
+            }
+        }
+        return new CapacitorBank(list);
+    }
+
     public int totalParts() {
         return entries.stream().mapToInt(BankEntry::count).sum();
     }
 
+    /** Distinct part numbers (a part placed in two regions is one line item). */
     public int distinctParts() {
-        return entries.size();
+        return (int) entries.stream().map(e -> e.part().name()).distinct().count();
     }
 
+    /** Whether any entry names a placement region. */
+    public boolean isPlaced() {
+        return entries.stream().anyMatch(e -> !e.region().isEmpty());
+    }
+
+    /** The entries in {@code region}, in bank order. */
+    public List<BankEntry> inRegion(String region) {
+        return entries.stream().filter(e -> e.region().equals(region)).toList();
+    }
+
+    /** Parts of {@code partName} in {@code region}. */
+    public int count(String partName, String region) {
+        return entries.stream().filter(e -> e.part().name().equals(partName) && e.region().equals(region))
+                .mapToInt(BankEntry::count).sum();
+    }
+
+    /** Counts aligned with candidate i = {@code parts.get(i)} in {@code regions.get(i)}. */
+    public int[] countsFor(List<Part> parts, List<String> regions) {
+        int[] c = new int[parts.size()];
+        for (int i = 0; i < c.length; i++) {
+            c[i] = count(parts.get(i).name(), regions.get(i));
+        }
+        return c;
+    }
+
+    /** Parts of {@code partName} over all regions. */
     public int count(String partName) {
         return entries.stream().filter(e -> e.part().name().equals(partName)).mapToInt(BankEntry::count).sum();
     }

@@ -266,7 +266,7 @@ public final class MonteCarlo {
                     p.capacitanceF() * (1 + tolerance[i] * uC), p.esrOhms() * (1 + spread * uR),
                     p.eslH() * (1 + spread * uL), p.mountInductanceH(), p.unitCost(), p.voltageRatingV(),
                     p.toleranceFraction(), p.dcBiasRetention(), p.maxCount());
-            out.add(new BankEntry(drawn, e.count()));
+            out.add(new BankEntry(drawn, e.count(), e.region()));
         }
         return out;
     }

@@ -2,6 +2,7 @@ package breakwater.network;
 
 import breakwater.catalog.BankEntry;
 import breakwater.scenario.Footprint;
+import breakwater.scenario.Region;
 import breakwater.scenario.Scenario;
 
 import java.util.ArrayList;
@@ -14,7 +15,8 @@ public final class NetworkBuilder {
     }
 
     /**
-     * The network of {@code scenario} with {@code bank} on the board node, mounting inductances taken from
+     * The network of {@code scenario} with {@code bank} on the board node (or, when the scenario declares
+     * placement regions, each entry in its region behind that region's spreading path), mounting inductances taken from
      * {@code footprint} where it lists a part's case. The plane sits at the board node; the die at the load
      * node behind the package, or at the board node when there is no package.
      */
@@ -25,8 +27,22 @@ public final class NetworkBuilder {
             board.add(new SeriesBranch("plane", scenario.plane().resistanceOhms(), 0.0,
                     scenario.plane().capacitanceF()));
         }
+        List<RegionPath> regions = new ArrayList<>();
+        for (Region r : scenario.regions()) {
+            List<SeriesBranch> here = new ArrayList<>();
+            for (BankEntry e : bank) {
+                if (e.count() > 0 && e.region().equals(r.name())) {
+                    here.add(PartBranches.single(e.part(), footprint).parallel(e.count()));
+                }
+            }
+            regions.add(new RegionPath(r.name(), r.resistanceOhms(), r.inductanceH(), here));
+        }
         for (BankEntry e : bank) {
-            if (e.count() > 0) {
+            if (e.count() > 0 && scenario.region(e.region()).isEmpty()) {
+                if (!e.region().isEmpty() || !scenario.regions().isEmpty()) {
+                    throw new IllegalArgumentException(e.part().name() + ": placed in region '" + e.region()
+                            + "', the scenario's regions are " + scenario.regionNames());
+                }
                 board.add(PartBranches.single(e.part(), footprint).parallel(e.count()));
             }
         }
@@ -40,6 +56,6 @@ public final class NetworkBuilder {
                 board, hasPackage,
                 hasPackage ? scenario.packagePath().resistanceOhms() : 0.0,
                 hasPackage ? scenario.packagePath().inductanceH() : 0.0,
-                load);
+                load, regions);
     }
 }

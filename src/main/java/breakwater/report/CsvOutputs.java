@@ -16,19 +16,23 @@ public final class CsvOutputs {
     /**
      * bom.csv: {@code part,description,case,count,unit_cost,extended_cost}, one row per part, then a
      * {@code TOTAL} row whose count is the number of parts and whose extended cost is cost_total
-     * (parts + placement + line items; the description spells out the split).
+     * (parts + placement + line items; the description spells out the split). A placed bank
+     * (docs/network-model.md#placement-regions) has a last column {@code region}, one row per part and region.
      */
     public static void writeBom(Evaluation e, String currency, Writer w) throws IOException {
-        w.write("part,description,case,count,unit_cost,extended_cost\n");
+        boolean placed = e.bank().isPlaced();
+        w.write("part,description,case,count,unit_cost,extended_cost" + (placed ? ",region" : "") + "\n");
         for (BankEntry be : e.bank().entries()) {
             w.write(Csv.text(be.part().name()) + "," + Csv.text(be.part().description()) + ","
                     + Csv.text(be.part().caseCode()) + "," + be.count() + "," + Csv.num(be.part().unitCost()) + ","
-                    + Csv.num(breakwater.design.CostBreakdown.extended(be).doubleValue()) + "\n");
+                    + Csv.num(breakwater.design.CostBreakdown.extended(be).doubleValue())
+                    + (placed ? "," + Csv.text(be.region()) : "") + "\n");
         }
         String split = String.format(Locale.ROOT, "parts %.4f + placement %.4f + line items %.4f%s",
                 e.cost().partsCost(), e.cost().placementCost(), e.cost().lineItemCost(),
                 currency.isEmpty() ? "" : " " + currency);
-        w.write("TOTAL," + Csv.text(split) + ",," + e.bank().totalParts() + ",," + Csv.num(e.cost().total()) + "\n");
+        w.write("TOTAL," + Csv.text(split) + ",," + e.bank().totalParts() + ",," + Csv.num(e.cost().total())
+                + (placed ? "," : "") + "\n");
     }
 
     /** worst-case.csv: {@code time_s,load_current_a,voltage_v}, the droop pattern up to and after the worst instant. */

@@ -106,6 +106,31 @@ public final class SummaryJson {
             o.put("count", be.count());
             o.put("case", be.part().caseCode());
             o.put("unit_cost", be.part().unitCost());
+            if (!be.region().isEmpty()) {
+                o.put("region", be.region());
+            }
+        }
+        if (!scenario.regions().isEmpty()) {
+            // each region: its spreading path, what is placed there, and how much of its room that uses
+            ArrayNode regions = root.putArray("regions");
+            for (breakwater.scenario.Region region : scenario.regions()) {
+                ObjectNode o = regions.addObject();
+                o.put("name", region.name());
+                o.put("resistance_ohm", region.resistanceOhms());
+                o.put("inductance_h", region.inductanceH());
+                java.util.List<BankEntry> here = e.bank().inRegion(region.name());
+                o.put("parts", here.stream().mapToInt(BankEntry::count).sum());
+                if (region.room().maxParts() >= 0) {
+                    o.put("max_parts", region.room().maxParts());
+                }
+                ObjectNode perCase = o.putObject("per_case");
+                for (var limit : region.room().maxPerCase().entrySet()) {
+                    ObjectNode c = perCase.putObject(limit.getKey());
+                    c.put("placed", here.stream().filter(b -> b.part().caseCode().equals(limit.getKey()))
+                            .mapToInt(BankEntry::count).sum());
+                    c.put("max", limit.getValue());
+                }
+            }
         }
         root.put("cost_total", e.cost().total());
         ObjectNode cost = root.putObject("cost");

@@ -18,6 +18,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -70,6 +71,7 @@ public final class ScenarioReader {
         SECTIONS.put("catalog", List.of("file"));
         SECTIONS.put("board", List.of("max_parts", "max_distinct", "max_per_case"));
         SECTIONS.put("footprint", List.of());
+        SECTIONS.put("region", List.of());
         SECTIONS.put("cost", List.of("placement", "line_item", "currency"));
         SECTIONS.put("solver", List.of("time_limit", "seed", "margin"));
         SECTIONS.put("objective", List.of("require_target"));
@@ -161,9 +163,10 @@ public final class ScenarioReader {
             boolean requireTarget = objective();
             double margin = nonNegative("solver", "margin", Quantity.VOLTAGE);
             String existing = existing();
+            List<Region> regions = regions();
             problems.throwIfAnyInFileOrder();
             return new Scenario(source, rail, band, regulator, plane, packagePath, die, catalog, board,
-                    footprints, cost, solver, requireTarget, existing, margin);
+                    footprints, cost, solver, requireTarget, existing, margin, regions);
         }
 
         // ---- structure ----
@@ -186,7 +189,7 @@ public final class ScenarioReader {
                     }
                 } else if (!e.getValue().isObject()) {
                     error(at.key(path), "'" + name + "' must be a section [" + name + "], not a single value");
-                } else if (!name.equals("footprint")) {
+                } else if (!name.equals("footprint") && !name.equals("region")) {
                     checkKeys(name, (ObjectNode) e.getValue());
                 }
             }
@@ -410,6 +413,81 @@ public final class ScenarioReader {
                 }
             }
             return problems.isEmpty() ? new Board(maxParts, maxDistinct, perCase) : Board.UNLIMITED;
+        }
+
+        /** The keys of a {@code [region.NAME]} table. */
+        private static final List<String> REGION_KEYS = List.of("resistance", "inductance", "max_parts", "max_per_case");
+
+        /** {@code [region.NAME]} tables in file order (docs/file-contracts.md#scenario-toml). */
+        private List<Region> regions() {
+            List<Region> result = new ArrayList<>();
+            Optional<ObjectNode> section = section("region");
+            if (section.isEmpty()) {
+                return result;
+            }
+            for (Map.Entry<String, JsonNode> e : section.get().properties()) {
+                String name = e.getKey();
+                List<String> rPath = List.of("region", name);
+                if (!e.getValue().isObject()) {
+                    keyError(rPath, "region." + name + " must be a table: write [region.NAME] followed by"
+                            + " resistance, inductance and, if the room is limited, max_parts and [region.NAME.max_per_case]");
+                    continue;
+                }
+                ObjectNode table = (ObjectNode) e.getValue();
+                for (Iterator<String> it = table.fieldNames(); it.hasNext(); ) {
+                    String key = it.next();
+                    if (!REGION_KEYS.contains(key)) {
+                        TomlLocator.Pos p = at.key(List.of("region", name, key));
+                        Diagnostic d = Diagnostic.at(source, p.line(), p.column(), "unknown key '" + key
+                                + "' in [region." + name + "], its keys are " + String.join(", ", REGION_KEYS));
+                        problems.add(Suggestions.closest(key, REGION_KEYS).map(s -> d.withHint("you meant '" + s + "'?"))
+                                .orElse(d));
+                    }
+                }
+                double r = regionValue(name, table, "resistance", Quantity.RESISTANCE);
+                double l = regionValue(name, table, "inductance", Quantity.INDUCTANCE);
+                int maxParts = integer(List.of("region", name, "max_parts"), 0, -1);
+                Map<String, Integer> perCase = new LinkedHashMap<>();
+                JsonNode cases = table.get("max_per_case");
+                if (cases != null && !cases.isObject()) {
+                    valueError(List.of("region", name, "max_per_case"), "region." + name + ".max_per_case must be a "
+                            + "table: write [region." + name + ".max_per_case] with lines such as 0201 = 30");
+                } else if (cases != null) {
+                    for (Iterator<String> it = cases.fieldNames(); it.hasNext(); ) {
+                        String code = it.next();
+                        List<String> path = List.of("region", name, "max_per_case", code);
+                        if (!CaseCode.isValid(code)) {
+                            keyError(path, "'" + code + "' in [region." + name + ".max_per_case] is not a case code, "
+                                    + CaseCode.RULE);
+                            continue;
+                        }
+                        int n = integer(path, 0, -1);
+                        if (n >= 0) {
+                            perCase.put(code, n);
+                        }
+                    }
+                }
+                if (Double.isFinite(r) && Double.isFinite(l) && r >= 0 && l >= 0) {
+                    result.add(new Region(name, r, l, new Board(maxParts, -1, perCase)));
+                }
+            }
+            return result;
+        }
+
+        /** A region's spreading R or L: 0 when absent, reported when negative or unreadable (NaN). */
+        private double regionValue(String name, ObjectNode table, String key, Quantity q) {
+            JsonNode n = table.get(key);
+            if (n == null) {
+                return 0.0;
+            }
+            List<String> path = List.of("region", name, key);
+            double v = quantity(path, n, q);
+            if (v < 0) {
+                valueError(path, "region." + name + "." + key + " is negative, a spreading " + q.description()
+                        + " must be >= 0");
+                return Double.NaN;
+            }
+            return v;
         }
 
         private Map<String, Footprint> footprints() {
