@@ -28,7 +28,7 @@ public final class CandidateJudge {
     public static final int POINTS_PER_DECADE = 50;
 
     private final BankEvaluator evaluator;
-    private final List<Part> candidates;
+    private final Candidates candidates;
     private final ImpedanceEngine engine;
     private final double[] re;
     private final double[] im;
@@ -44,6 +44,16 @@ public final class CandidateJudge {
     private final int[] caseLimitIndex;
     private final int[] caseLimits;
     private final int[] perCase;
+    /** Per candidate, its region's index in the scenario (−1: the board node). */
+    private final int[] regionOf;
+    /** Per region, its max_parts (−1: none). */
+    private final int[] regionMaxParts;
+    private final int[] regionTotal;
+    /** Per candidate, the index of (its region, its case) among the regions' max_per_case limits, or −1. */
+    private final int[] regionCaseIndex;
+    private final int[] regionCaseLimits;
+    private final int[] regionPerCase;
+    private final boolean[] partUsed;
     private long unjudged;
     /**
      * The last model built for each set of distinct parts in use (least recently used dropped): the next
@@ -62,7 +72,16 @@ public final class CandidateJudge {
     private long warmStarts;
 
     public CandidateJudge(BankEvaluator evaluator, List<Part> candidates) {
+        this(evaluator, Candidates.of(candidates), true);
+    }
+
+    public CandidateJudge(BankEvaluator evaluator, Candidates candidates) {
         this(evaluator, candidates, true);
+    }
+
+    /** As {@link #CandidateJudge(BankEvaluator, Candidates, boolean)} for the parts on the board node. */
+    public CandidateJudge(BankEvaluator evaluator, List<Part> candidates, boolean warmStart) {
+        this(evaluator, Candidates.of(candidates), warmStart);
     }
 
     /**
@@ -70,36 +89,57 @@ public final class CandidateJudge {
      *                  ({@link PoleResidueModel#near}); false builds every model by the eigenvalue search
      *                  (the same figures to rounding, slower: for benchmarks and cross-checks)
      */
-    public CandidateJudge(BankEvaluator evaluator, List<Part> candidates, boolean warmStart) {
-        if (!evaluator.scenario().regions().isEmpty()) {
-            throw new RequestRefused("the scenario declares placement regions ([region." + evaluator.scenario()
-                    .regions().get(0).name() + "] …): check judges a placed bank (--bank FILE with a region column),"
-                    + " but solve, trim, compare and frontier do not choose regions yet; to search, use a copy of the"
-                    + " scenario without its [region.*] tables");
-        }
+    public CandidateJudge(BankEvaluator evaluator, Candidates candidates, boolean warmStart) {
         this.warmStart = warmStart;
         this.evaluator = evaluator;
-        this.candidates = List.copyOf(candidates);
+        this.candidates = candidates;
         Scenario s = evaluator.scenario();
         this.fixed = NetworkBuilder.build(s, List.of(), evaluator.footprint());
         List<SeriesBranch> unitList = new ArrayList<>();
-        for (Part p : this.candidates) {
+        for (Part p : candidates.parts()) {
             unitList.add(PartBranches.single(p, evaluator.footprint()));
         }
         this.units = List.copyOf(unitList);
         List<String> limitedCases = new ArrayList<>(s.board().maxPerCase().keySet());
         this.caseLimits = limitedCases.stream().mapToInt(c -> s.board().maxPerCase().get(c)).toArray();
         this.perCase = new int[caseLimits.length];
-        this.caseLimitIndex = this.candidates.stream().mapToInt(p -> limitedCases.indexOf(p.caseCode())).toArray();
+        this.caseLimitIndex = candidates.parts().stream().mapToInt(p -> limitedCases.indexOf(p.caseCode())).toArray();
+        List<String> regionNames = s.regionNames();
+        int n = candidates.size();
+        this.regionOf = new int[n];
+        this.regionCaseIndex = new int[n];
+        List<String> regionCases = new ArrayList<>();
+        List<Integer> regionCaseMax = new ArrayList<>();
+        for (breakwater.scenario.Region r : s.regions()) {
+            for (var limit : r.room().maxPerCase().entrySet()) {
+                regionCases.add(r.name() + '\u0000' + limit.getKey());
+                regionCaseMax.add(limit.getValue());
+            }
+        }
+        for (int i = 0; i < n; i++) {
+            String region = candidates.region(i);
+            regionOf[i] = region.isEmpty() ? -1 : regionNames.indexOf(region);
+            if (regionOf[i] < 0 && (!region.isEmpty() || !regionNames.isEmpty())) {
+                throw new IllegalArgumentException("candidate " + candidates.part(i).name() + " in region '" + region
+                        + "', the scenario's regions are " + regionNames);
+            }
+            regionCaseIndex[i] = regionCases.indexOf(region + '\u0000' + candidates.part(i).caseCode());
+        }
+        this.regionMaxParts = s.regions().stream().mapToInt(r -> r.room().maxParts()).toArray();
+        this.regionTotal = new int[regionMaxParts.length];
+        this.regionCaseLimits = regionCaseMax.stream().mapToInt(Integer::intValue).toArray();
+        this.regionPerCase = new int[regionCaseLimits.length];
+        this.partUsed = new boolean[candidates.distinctParts()];
         FrequencyGrid grid = FrequencyGrid.logarithmic(s.band().fromHz(), s.band().toHz(), POINTS_PER_DECADE);
-        this.engine = new ImpedanceEngine(fixed, this.units, grid);
+        this.engine = regionNames.isEmpty() ? new ImpedanceEngine(fixed, this.units, grid)
+                : new ImpedanceEngine(fixed, this.units, regionOf, grid);
         this.re = new double[grid.size()];
         this.im = new double[grid.size()];
         this.mag = new double[grid.size()];
-        this.unitCost = this.candidates.stream().mapToDouble(Part::unitCost).toArray();
+        this.unitCost = candidates.parts().stream().mapToDouble(Part::unitCost).toArray();
     }
 
-    public List<Part> candidates() {
+    public Candidates candidates() {
         return candidates;
     }
 
@@ -145,17 +185,37 @@ public final class CandidateJudge {
         // the bank's network and board figures straight from the counts (same rules as NetworkBuilder and
         // BoardCheck, which the full evaluation uses; a test holds the two paths together)
         List<SeriesBranch> board = new ArrayList<>(fixed.boardBranches());
+        List<List<SeriesBranch>> inRegion = new ArrayList<>();
+        for (int r = 0; r < regionMaxParts.length; r++) {
+            inRegion.add(new ArrayList<>());
+        }
         int total = 0;
         int distinct = 0;
         java.util.BitSet used = new java.util.BitSet(counts.length);
         double partsCost = 0;
         java.util.Arrays.fill(perCase, 0);
+        java.util.Arrays.fill(regionTotal, 0);
+        java.util.Arrays.fill(regionPerCase, 0);
+        java.util.Arrays.fill(partUsed, false);
         for (int i = 0; i < counts.length; i++) {
             int n = counts[i];
             if (n > 0) {
-                board.add(units.get(i).parallel(n));
+                SeriesBranch b = units.get(i).parallel(n);
+                if (regionOf[i] < 0) {
+                    board.add(b);
+                } else {
+                    inRegion.get(regionOf[i]).add(b);
+                    regionTotal[regionOf[i]] += n;
+                    if (regionCaseIndex[i] >= 0) {
+                        regionPerCase[regionCaseIndex[i]] += n;
+                    }
+                }
                 total += n;
-                distinct++;
+                int part = candidates.partIndex(i);
+                if (!partUsed[part]) {
+                    partUsed[part] = true;
+                    distinct++;
+                }
                 used.set(i);
                 partsCost += unitCost[i] * n;
                 if (caseLimitIndex[i] >= 0) {
@@ -176,8 +236,23 @@ public final class CandidateJudge {
                 boardExcess += perCase[c] - caseLimits[c];
             }
         }
+        for (int r = 0; r < regionTotal.length; r++) {
+            if (regionMaxParts[r] >= 0 && regionTotal[r] > regionMaxParts[r]) {
+                boardExcess += regionTotal[r] - regionMaxParts[r];
+            }
+        }
+        for (int c = 0; c < regionPerCase.length; c++) {
+            if (regionPerCase[c] > regionCaseLimits[c]) {
+                boardExcess += regionPerCase[c] - regionCaseLimits[c];
+            }
+        }
+        List<breakwater.network.RegionPath> regions = new ArrayList<>(regionTotal.length);
+        for (int r = 0; r < regionTotal.length; r++) {
+            regions.add(fixed.regions().get(r).withBranches(inRegion.get(r)));
+        }
         PowerNetwork network = new PowerNetwork(fixed.regulatorResistanceOhms(), fixed.regulatorInductanceH(), board,
-                fixed.hasPackage(), fixed.packageResistanceOhms(), fixed.packageInductanceH(), fixed.loadBranches());
+                fixed.hasPackage(), fixed.packageResistanceOhms(), fixed.packageInductanceH(), fixed.loadBranches(),
+                regions);
         // where the target is required and the peak comes near it, refine the two highest local maxima of the
         // grid on the network itself with the full analysis's own Brent search, so the solver's target
         // check agrees with the final verdict (elsewhere the grid value ranks banks well enough)

@@ -1,5 +1,6 @@
 package breakwater.optimize;
 
+import breakwater.design.Candidates;
 import ai.timefold.solver.core.api.score.BendableScore;
 import ai.timefold.solver.core.api.solver.Solver;
 import ai.timefold.solver.core.api.solver.SolverFactory;
@@ -51,7 +52,7 @@ public final class BankSearch {
     /** Tabu search evaluates this many acceptable moves per step and takes the best of them. */
     static final int ACCEPTED_PER_STEP = Integer.getInteger("bw.accepted", 16);
     private final JudgePool pool;
-    private final List<Part> candidates;
+    private final Candidates candidates;
     private final int[] maxCounts;
     private final AtomicBoolean stopRequested = new AtomicBoolean();
     private final List<Solver<BankPlan>> running = new ArrayList<>();
@@ -65,16 +66,21 @@ public final class BankSearch {
      * @param candidates parts the search may use
      * @param maxCounts  largest count per candidate (aligned with {@code candidates})
      */
-    public BankSearch(BankEvaluator evaluator, List<Part> candidates, int[] maxCounts) {
-        if (candidates.size() != maxCounts.length || candidates.isEmpty()) {
+    /** A search over the parts themselves, on the board node (a scenario without placement regions). */
+    public BankSearch(BankEvaluator evaluator, List<Part> parts, int[] maxCounts) {
+        this(evaluator, Candidates.of(parts), maxCounts);
+    }
+
+    public BankSearch(BankEvaluator evaluator, Candidates candidates, int[] maxCounts) {
+        if (candidates.size() != maxCounts.length || candidates.size() == 0) {
             throw new IllegalArgumentException("need one max count per candidate, and at least one candidate");
         }
-        this.candidates = List.copyOf(candidates);
+        this.candidates = candidates;
         this.maxCounts = maxCounts.clone();
         this.pool = new JudgePool(evaluator, this.candidates);
     }
 
-    public List<Part> candidates() {
+    public Candidates candidates() {
         return candidates;
     }
 
@@ -95,14 +101,14 @@ public final class BankSearch {
             return java.util.Optional.empty();
         }
         double elapsed = (System.nanoTime() - startNanos) / 1e9;
-        return java.util.Optional.of(new SearchProgress(elapsed, CapacitorBank.of(candidates, counts),
+        return java.util.Optional.of(new SearchProgress(elapsed, candidates.bank(counts),
                 pool.peek(counts), pool.requests()));
     }
 
     /** Runs the search from {@code start} (may be empty) and returns the best bank. */
     public SearchResult run(SearchSettings settings, CapacitorBank start) {
         startNanos = System.nanoTime();
-        int[] given = start.countsFor(candidates);
+        int[] given = candidates.counts(start);
         for (int i = 0; i < given.length; i++) {
             given[i] = Math.min(given[i], maxCounts[i]);
         }
@@ -154,7 +160,7 @@ public final class BankSearch {
             synchronized (this) {
                 improvements = List.copyOf(history);
             }
-            return new SearchResult(CapacitorBank.of(candidates, best), pool.judge(best), pool.requests(),
+            return new SearchResult(candidates.bank(best), pool.judge(best), pool.requests(),
                     seconds, settings.seed(), settings.solvers(), stopRequested.get(), improvements);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
@@ -260,7 +266,7 @@ public final class BankSearch {
     private BankPlan problem(int[] startCounts) {
         List<PartCount> list = new ArrayList<>();
         for (int i = 0; i < candidates.size(); i++) {
-            list.add(new PartCount(i, candidates.get(i), maxCounts[i], startCounts[i]));
+            list.add(new PartCount(i, candidates.part(i), candidates.region(i), maxCounts[i], startCounts[i]));
         }
         return new BankPlan(pool, list);
     }

@@ -1,5 +1,6 @@
 package breakwater.optimize;
 
+import breakwater.design.Candidates;
 import breakwater.catalog.Part;
 import breakwater.design.BankEvaluator;
 import breakwater.design.CapacitorBank;
@@ -56,9 +57,10 @@ public record CompareResult(List<Row> rows, Row primary, boolean givenBank, Sear
      * @param bankName how the user knows the given bank (its file), for the announcement
      */
     public static CompareResult compare(Scenario scenario, List<String> names, Optional<CapacitorBank> given,
-                                        Optional<String> bankName, List<Part> candidates, SearchSettings all,
+                                        Optional<String> bankName, List<Part> parts, SearchSettings all,
                                         SearchRunner runner) throws InputException {
         SearchSettings each = all.split(names.size());
+        Candidates candidates = Candidates.forScenario(parts, scenario);
         int[] max = MaxCounts.of(candidates, scenario);
         runner.announce(new SearchStage.Comparing(names, given.isPresent() ? bankName : Optional.empty(), all, each));
         List<Row> rows = new ArrayList<>();

@@ -1,5 +1,6 @@
 package breakwater.optimize;
 
+import breakwater.design.Candidates;
 import breakwater.catalog.BankEntry;
 import breakwater.catalog.Part;
 import breakwater.design.BankEvaluator;
@@ -61,9 +62,14 @@ public final class CostDown {
     }
 
     /** The search's largest counts, raised where needed so the existing bank itself can be represented. */
-    public static int[] maxCounts(List<Part> candidates, Scenario scenario, CapacitorBank existing) {
+    /** As {@link #maxCounts(Candidates, Scenario, CapacitorBank)} for the parts themselves, on the board node. */
+    public static int[] maxCounts(List<Part> parts, Scenario scenario, CapacitorBank existing) {
+        return maxCounts(Candidates.of(parts), scenario, existing);
+    }
+
+    public static int[] maxCounts(Candidates candidates, Scenario scenario, CapacitorBank existing) {
         int[] max = MaxCounts.of(candidates, scenario);
-        int[] have = existing.countsFor(candidates);
+        int[] have = candidates.counts(existing);
         for (int i = 0; i < max.length; i++) {
             max[i] = Math.max(max[i], have[i]);
         }

@@ -20,7 +20,9 @@ import java.util.SequencedCollection;
  *   <li><b>replace by a neighbouring value</b>: move every part of one type to the next capacitance up or
  *       down in the same case, or to the same capacitance in the next case size;</li>
  *   <li><b>transfer</b>: one part more of one type, one fewer of another — a step along the edge of the
- *       feasible region, where the cheapest banks lie and single changes would cross into violation.</li>
+ *       feasible region, where the cheapest banks lie and single changes would cross into violation;</li>
+ *   <li><b>relocate</b> (with placement regions): every part of one type moved to another region, as many
+ *       as fit there.</li>
  * </ul>
  * The list is rebuilt every step from the current counts (see {@link BankSearch}), so every move changes
  * something.
@@ -62,16 +64,27 @@ public final class CountMoves implements MoveListFactory<BankPlan> {
                 if (a != b && nb < b.getMaxCount()) {
                     moves.add(new SetCounts(List.of(a, b), new int[] {na - 1, nb + 1}, "transfer"));
                 }
+                // with placement regions: the same part moved to another region, all of it (or as many as fit)
+                if (a != b && !a.getRegion().equals(b.getRegion()) && a.getPart().name().equals(b.getPart().name())) {
+                    int moved = Math.min(na, b.getMaxCount() - nb);
+                    if (moved > 1) {
+                        moves.add(new SetCounts(List.of(a, b), new int[] {na - moved, nb + moved}, "relocate"));
+                    }
+                }
             }
         }
         return moves;
     }
 
-    /** Next capacitance up and down in the same case; same capacitance (±10 %) in other case sizes. */
+    /**
+     * Next capacitance up and down in the same case; same capacitance (±10 %) in other case sizes; both in
+     * the same placement region.
+     */
     static List<PartCount> neighbours(PartCount a, List<PartCount> all) {
         List<PartCount> out = new ArrayList<>();
         Part pa = a.getPart();
-        List<PartCount> sameCase = all.stream().filter(o -> o != a && o.getPart().caseCode().equals(pa.caseCode()))
+        List<PartCount> sameCase = all.stream().filter(o -> o != a && o.getRegion().equals(a.getRegion())
+                        && o.getPart().caseCode().equals(pa.caseCode()))
                 .sorted(Comparator.comparingDouble(o -> o.getPart().capacitanceF())).toList();
         PartCount below = null;
         PartCount above = null;
@@ -90,7 +103,7 @@ public final class CountMoves implements MoveListFactory<BankPlan> {
             out.add(above);
         }
         for (PartCount o : all) {
-            if (o != a && !o.getPart().caseCode().equals(pa.caseCode())
+            if (o != a && o.getRegion().equals(a.getRegion()) && !o.getPart().caseCode().equals(pa.caseCode())
                     && Math.abs(o.getPart().capacitanceF() / pa.capacitanceF() - 1) <= 0.1) {
                 out.add(o);
             }
@@ -138,7 +151,8 @@ public final class CountMoves implements MoveListFactory<BankPlan> {
         public String toString() {
             StringBuilder b = new StringBuilder(kind).append('[');
             for (int i = 0; i < targets.size(); i++) {
-                b.append(i == 0 ? "" : ", ").append(targets.get(i).getPart().name()).append("→").append(values[i]);
+                b.append(i == 0 ? "" : ", ").append(targets.get(i).getPart().name())
+                        .append(targets.get(i).getRegion().isEmpty() ? "" : "@" + targets.get(i).getRegion()).append("→").append(values[i]);
             }
             return b.append(']').toString();
         }

@@ -1,5 +1,6 @@
 package breakwater.optimize;
 
+import breakwater.design.Candidates;
 import breakwater.catalog.Part;
 import breakwater.design.BankEvaluator;
 import breakwater.design.CapacitorBank;
@@ -113,7 +114,7 @@ public final class ExcursionFrontier {
      * @param points      number of limits, &ge; 2
      * @param stopped     true once the user asked to stop: the remaining points are filled without a search
      */
-    public static Result run(BankEvaluator spec, List<Part> candidates, int[] maxCounts, SearchSettings each,
+    public static Result run(BankEvaluator spec, Candidates candidates, int[] maxCounts, SearchSettings each,
                              int points, Runner runner, BooleanSupplier stopped) {
         if (points < 2) {
             throw new IllegalArgumentException("a frontier needs at least 2 points, got " + points);

@@ -1,5 +1,6 @@
 package breakwater.optimize;
 
+import breakwater.design.Candidates;
 import breakwater.catalog.Part;
 import breakwater.design.BankEvaluator;
 import breakwater.design.Evaluation;
@@ -26,9 +27,10 @@ public record FrontierResult(String footprintName, BankEvaluator judge, Evaluati
                              boolean interrupted, Verdict verdict) {
 
     /** The frontier of {@code points} limits; the time of {@code all} is shared by its points + 1 searches. */
-    public static FrontierResult frontier(BankEvaluator spec, String footprintName, List<Part> candidates, SearchSettings all, int points,
+    public static FrontierResult frontier(BankEvaluator spec, String footprintName, List<Part> parts, SearchSettings all, int points,
                                           SearchRunner runner) {
         SearchSettings each = all.split(points + 1);
+        Candidates candidates = Candidates.forScenario(parts, spec.scenario());
         runner.announce(new SearchStage.Frontier(points, all, each));
         int[] step = {0};
         ExcursionFrontier.Result f = ExcursionFrontier.run(spec, candidates, MaxCounts.of(candidates, spec.scenario()),

@@ -1,5 +1,6 @@
 package breakwater.optimize;
 
+import breakwater.design.Candidates;
 import breakwater.catalog.Part;
 import breakwater.design.BankEvaluator;
 import breakwater.design.BoardCheck;
@@ -34,21 +35,23 @@ final class ImpedanceShaping {
     /**
      * @param meetsSpec the exact judge's verdict on a bank (counts aligned with {@code candidates})
      */
-    static int[] start(BankEvaluator evaluator, List<Part> candidates, int[] maxCounts, int[] from,
+    static int[] start(BankEvaluator evaluator, Candidates candidates, int[] maxCounts, int[] from,
                        Predicate<int[]> meetsSpec) {
         Scenario s = evaluator.scenario();
         List<SeriesBranch> units = new ArrayList<>();
-        for (Part p : candidates) {
+        for (Part p : candidates.parts()) {
             units.add(PartBranches.single(p, evaluator.footprint()));
         }
         FrequencyGrid grid = FrequencyGrid.logarithmic(s.band().fromHz(), s.band().toHz(), POINTS_PER_DECADE);
-        ImpedanceEngine engine = new ImpedanceEngine(NetworkBuilder.build(s, List.of(), evaluator.footprint()), units, grid);
+        int[] regionOf = candidates.regions().stream().mapToInt(r -> s.regionNames().indexOf(r)).toArray();
+        ImpedanceEngine engine = new ImpedanceEngine(NetworkBuilder.build(s, List.of(), evaluator.footprint()), units,
+                regionOf, grid);
         double[] re = new double[grid.size()];
         double[] im = new double[grid.size()];
         double[] mag = new double[grid.size()];
         double[] unitCost = new double[candidates.size()];
         for (int i = 0; i < unitCost.length; i++) {
-            unitCost[i] = candidates.get(i).unitCost() + s.cost().placementPerPart();
+            unitCost[i] = candidates.part(i).unitCost() + s.cost().placementPerPart();
         }
         int[] counts = from.clone();
         double alpha = 1.0;
@@ -64,7 +67,7 @@ final class ImpedanceShaping {
                         continue;
                     }
                     counts[p]++;
-                    boolean fits = BoardCheck.violations(CapacitorBank.of(candidates, counts), s.board()).isEmpty();
+                    boolean fits = BoardCheck.violations(candidates.bank(counts), s.board(), s.regions()).isEmpty();
                     double a = fits ? area(engine, counts, re, im, mag, line) : area;
                     counts[p]--;
                     double addedCost = unitCost[p] + (counts[p] == 0 ? s.cost().perLineItem() : 0);

@@ -1,5 +1,6 @@
 package breakwater.optimize;
 
+import breakwater.design.Candidates;
 import breakwater.catalog.Part;
 import breakwater.design.BankEvaluator;
 import breakwater.design.CandidateJudge;
@@ -26,19 +27,24 @@ public final class JudgePool {
     private static final int MEMO_LIMIT = 400_000;
 
     private final BankEvaluator evaluator;
-    private final List<Part> candidates;
+    private final Candidates candidates;
     private final ThreadLocal<CandidateJudge> judges;
     private final ConcurrentHashMap<Key, Judgement> memo = new ConcurrentHashMap<>();
     private final AtomicLong computed = new AtomicLong();
     private final AtomicLong requests = new AtomicLong();
 
-    public JudgePool(BankEvaluator evaluator, List<Part> candidates) {
+    /** A pool over the parts themselves, on the board node (a scenario without placement regions). */
+    public JudgePool(BankEvaluator evaluator, List<Part> parts) {
+        this(evaluator, Candidates.of(parts));
+    }
+
+    public JudgePool(BankEvaluator evaluator, Candidates candidates) {
         this.evaluator = evaluator;
-        this.candidates = List.copyOf(candidates);
+        this.candidates = candidates;
         this.judges = ThreadLocal.withInitial(() -> new CandidateJudge(evaluator, this.candidates));
     }
 
-    public List<Part> candidates() {
+    public Candidates candidates() {
         return candidates;
     }
 

@@ -8,12 +8,14 @@ import ai.timefold.solver.core.api.domain.valuerange.ValueRangeProvider;
 import ai.timefold.solver.core.api.domain.variable.PlanningVariable;
 import breakwater.catalog.Part;
 
-/** Planning entity: how many of one catalog part the bank holds (0..maxCount). */
+/** Planning entity: how many of one catalog part the bank holds in one placement region (0..maxCount). */
 @PlanningEntity
 public class PartCount {
     @PlanningId
     private Integer index;
     private Part part;
+    /** The placement region, "" without regions. */
+    private String region = "";
     private int maxCount;
     @PlanningVariable(valueRangeProviderRefs = "countRange")
     private Integer count;
@@ -22,9 +24,10 @@ public class PartCount {
     public PartCount() {
     }
 
-    PartCount(int index, Part part, int maxCount, Integer count) {
+    PartCount(int index, Part part, String region, int maxCount, Integer count) {
         this.index = index;
         this.part = part;
+        this.region = region;
         this.maxCount = maxCount;
         this.count = count;
     }
@@ -49,6 +52,14 @@ public class PartCount {
 
     public void setPart(Part part) {
         this.part = part;
+    }
+
+    public String getRegion() {
+        return region;
+    }
+
+    public void setRegion(String region) {
+        this.region = region;
     }
 
     public int getMaxCount() {

@@ -1,5 +1,6 @@
 package breakwater.optimize;
 
+import breakwater.design.Candidates;
 import breakwater.catalog.Part;
 import breakwater.design.BankEvaluator;
 import breakwater.design.CapacitorBank;
@@ -40,10 +41,11 @@ public record SolveResult(String footprintName, BankEvaluator judge, Evaluation 
      * @throws InputException when a margin from the scenario leaves no room (one from the command line is
      *                        a {@link breakwater.design.RequestRefused})
      */
-    public static SolveResult solve(BankEvaluator spec, String footprintName, List<Part> candidates,
+    public static SolveResult solve(BankEvaluator spec, String footprintName, List<Part> parts,
                                     SearchSettings settings, Optional<DesignMargin> margin,
                                     Optional<MonteCarlo.Settings> monteCarlo, SearchRunner runner) throws InputException {
         BankEvaluator searchJudge = margin.isPresent() ? margin.get().narrow(spec) : spec;
+        Candidates candidates = Candidates.forScenario(parts, spec.scenario());
         BankSearch search = new BankSearch(searchJudge, candidates, MaxCounts.of(candidates, spec.scenario()));
         runner.announce(new SearchStage.Solving(candidates.size(), settings));
         // progress in the search's own terms: with a margin, "allowed" is the narrowed band

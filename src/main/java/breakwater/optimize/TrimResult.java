@@ -1,5 +1,6 @@
 package breakwater.optimize;
 
+import breakwater.design.Candidates;
 import breakwater.catalog.Part;
 import breakwater.design.BankEvaluator;
 import breakwater.design.CapacitorBank;
@@ -58,9 +59,10 @@ public record TrimResult(String footprintName, BankEvaluator judge, Evaluation e
      * @param bankName how the user knows the existing bank (its file), for the announcement
      */
     public static TrimResult trim(BankEvaluator spec, String footprintName, String bankName, CapacitorBank existing,
-                                  CostDown.Keep keep, List<Part> candidates, SearchSettings settings,
+                                  CostDown.Keep keep, List<Part> parts, SearchSettings settings,
                                   Optional<MonteCarlo.Settings> monteCarlo, SearchRunner runner) {
         Evaluation old = spec.evaluate(existing);
+        Candidates candidates = Candidates.forScenario(parts, spec.scenario());
         BankEvaluator judge = CostDown.judge(spec, old, keep);
         BankSearch search = new BankSearch(judge, candidates, CostDown.maxCounts(candidates, spec.scenario(), existing));
         runner.announce(new SearchStage.Trimming(bankName, old, keep, candidates.size(), settings));

@@ -37,10 +37,13 @@ public final class ConsoleReport {
             line(b, "Footprint", footprintName);
         }
         b.append('\n');
-        b.append(String.format(Locale.ROOT, "  %-24s %-6s %6s %10s %12s%n", "part", "case", "count", "unit", "extended"));
+        boolean placed = e.bank().isPlaced();
+        b.append(String.format(Locale.ROOT, "  %-24s %-6s %6s %10s %12s%s%n", "part", "case", "count", "unit", "extended",
+                placed ? "  region" : ""));
         for (BankEntry be : e.bank().entries()) {
-            b.append(String.format(Locale.ROOT, "  %-24s %-6s %6d %10s %12s%n", be.part().name(), be.part().caseCode(),
-                    be.count(), money(be.part().unitCost()), money(be.part().unitCost() * be.count())));
+            b.append(String.format(Locale.ROOT, "  %-24s %-6s %6d %10s %12s%s%n", be.part().name(), be.part().caseCode(),
+                    be.count(), money(be.part().unitCost()), money(be.part().unitCost() * be.count()),
+                    placed ? "  " + be.region() : ""));
         }
         if (e.bank().entries().isEmpty()) {
             b.append("  (empty bank)\n");

@@ -188,19 +188,34 @@ public final class HtmlReport {
     private static void bom(StringBuilder b, ReportModel.Bom bom) {
         b.append("<section id=\"bom\">\n<h2>Bill of materials</h2>\n");
         String cur = bom.currency().isEmpty() ? "" : " (" + esc(bom.currency()) + ")";
-        b.append("<table class=\"bom\">\n<thead><tr><th>part</th><th>description</th><th>case</th>")
+        boolean placed = bom.rows().stream().anyMatch(r -> !r.region().isEmpty());
+        b.append("<table class=\"bom\">\n<thead><tr>").append(placed ? "<th>region</th>" : "")
+                .append("<th>part</th><th>description</th><th>case</th>")
                 .append("<th class=\"num\">count</th><th class=\"num\">unit cost").append(cur)
                 .append("</th><th class=\"num\">extended").append(cur).append("</th></tr></thead>\n<tbody>\n");
         if (bom.rows().isEmpty()) {
             b.append("<tr><td colspan=\"6\" class=\"note\">(empty bank)</td></tr>\n");
         }
-        for (BomRow r : bom.rows()) {
-            b.append("<tr><td>").append(esc(r.part())).append("</td><td>").append(esc(r.description()))
+        // a placed bank: its rows grouped by region, in the order the regions first appear
+        List<BomRow> rows = bom.rows();
+        if (placed) {
+            List<String> order = rows.stream().map(BomRow::region).distinct().toList();
+            rows = rows.stream().sorted(java.util.Comparator.comparingInt(r -> order.indexOf(r.region()))).toList();
+        }
+        String last = null;
+        for (BomRow r : rows) {
+            b.append("<tr>");
+            if (placed) {
+                b.append("<td>").append(r.region().equals(last) ? "" : esc(r.region())).append("</td>");
+                last = r.region();
+            }
+            b.append("<td>").append(esc(r.part())).append("</td><td>").append(esc(r.description()))
                     .append("</td><td>").append(esc(r.caseCode())).append("</td><td class=\"num\">").append(r.count())
                     .append("</td><td class=\"num\">").append(money(r.unitCost())).append("</td><td class=\"num\">")
                     .append(money(r.extendedCost())).append("</td></tr>\n");
         }
-        b.append("<tr class=\"total\"><td>total</td><td>").append(esc(bom.totalNote()))
+        b.append("<tr class=\"total\">").append(placed ? "<td></td>" : "").append("<td>total</td><td>")
+                .append(esc(bom.totalNote()))
                 .append("</td><td></td><td class=\"num\">").append(bom.totalCount())
                 .append("</td><td></td><td class=\"num\">").append(money(bom.totalCost())).append("</td></tr>\n");
         b.append("</tbody>\n</table>\n</section>\n");

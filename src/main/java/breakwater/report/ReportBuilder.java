@@ -97,7 +97,7 @@ public final class ReportBuilder {
         List<ReportModel.BomRow> rows = new ArrayList<>();
         for (BankEntry be : e.bank().entries()) {
             rows.add(new ReportModel.BomRow(be.part().name(), be.part().description(), be.part().caseCode(), be.count(),
-                    be.part().unitCost(), be.part().unitCost() * be.count()));
+                    be.part().unitCost(), be.part().unitCost() * be.count(), be.region()));
         }
         ReportModel.Bom bom = new ReportModel.Bom(rows, e.cost().total(), currency, String.format(Locale.ROOT,
                 "parts %.4f + placement %.4f + line items %.4f", e.cost().partsCost(), e.cost().placementCost(),

@@ -86,10 +86,19 @@ public record ReportModel(
     }
 
 
-    /** One BOM line; {@code caseCode} is text ("0402"), costs are in the BOM's currency. */
+    /**
+     * One BOM line; {@code caseCode} is text ("0402"), costs are in the BOM's currency; {@code region} is the
+     * placement region ("" without regions).
+     */
     public record BomRow(String part, String description, String caseCode, int count, double unitCost,
-                         double extendedCost) {
+                         double extendedCost, String region) {
+        /** A row on the board node (no placement regions). */
+        public BomRow(String part, String description, String caseCode, int count, double unitCost, double extendedCost) {
+            this(part, description, caseCode, count, unitCost, extendedCost, "");
+        }
+
         public BomRow {
+            require(region != null, "BOM row '" + part + "' has a null region");
             requireText(part, "BOM part");
             require(description != null && caseCode != null, "BOM row '" + part + "' has a null description or case");
             require(count >= 0, "BOM row '" + part + "' has count " + count + "; counts are never negative");

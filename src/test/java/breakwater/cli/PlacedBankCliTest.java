@@ -158,10 +158,31 @@ class PlacedBankCliTest {
                 .contains("unknown key 'max_part' in [region.ring]").contains("max_parts");
     }
 
+    /**
+     * solve chooses parts, counts and regions: its bank meets the spec with every spreading path, respects
+     * each region's room, and reads back through check to the same worst case.
+     */
     @Test
-    void theSearchRefusesRegionsForNowWithAUsageError(@TempDir Path dir) throws IOException {
-        Run r = run("solve", scenario(dir, "8 pH", "40 pH", "250 pH").toString(), "--time-limit", "1s", "--quiet");
-        assertThat(r.code()).isEqualTo(ExitCodes.USAGE);
-        assertThat(r.err()).contains("placement regions").contains("check judges a placed bank");
+    void solveChoosesAPlacedBankThatMeetsTheSpecWithinEachRegionsRoom(@TempDir Path dir) throws IOException {
+        Path sc = scenario(dir, "8 pH", "40 pH", "250 pH");
+        // a little more room than the demo rail's 3 %, so that a short move-limited search lands inside it
+        Files.writeString(sc, Files.readString(sc).replace("tolerance = \"3 %\"", "tolerance = \"3.5 %\""));
+        Path out = dir.resolve("solved");
+        Run r = run("solve", sc.toString(), "--seed", "1", "--moves", "1500", "--solvers", "1", "--time-limit", "60s",
+                "--out", out.toString(), "--quiet");
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        JsonNode s = new ObjectMapper().readTree(out.resolve("summary.json").toFile());
+        assertThat(s.path("meets_spec").asBoolean()).isTrue();
+        assertThat(s.path("board_violations").size()).isZero();
+        for (JsonNode b : s.path("bank")) {
+            assertThat(b.path("region").asText()).isIn("under-package", "ring", "bulk");
+        }
+        JsonNode under = s.path("regions").get(0);
+        assertThat(under.path("parts").asInt()).isLessThanOrEqualTo(40);
+        assertThat(under.path("per_case").path("0201").path("placed").asInt()).isLessThanOrEqualTo(30);
+        Run back = run("check", sc.toString(), "--bank", out.resolve("bom.csv").toString(), "--json");
+        JsonNode c = new ObjectMapper().readTree(back.out());
+        assertThat(c.path("worst_case").path("droop_v").asDouble())
+                .isEqualTo(s.path("worst_case").path("droop_v").asDouble());
     }
 }

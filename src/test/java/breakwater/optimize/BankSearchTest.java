@@ -125,7 +125,7 @@ class BankSearchTest {
                         .withSpentLimit(Duration.ofMinutes(2)));
         List<PartCount> counts = new ArrayList<>();
         for (int i = 0; i < PARTS.size(); i++) {
-            counts.add(new PartCount(i, PARTS.get(i), MAX[i], 0));
+            counts.add(new PartCount(i, PARTS.get(i), "", MAX[i], 0));
         }
         BankPlan solved = SolverFactory.<BankPlan>create(cfg).buildSolver()
                 .solve(new BankPlan(new JudgePool(ev, PARTS), counts));

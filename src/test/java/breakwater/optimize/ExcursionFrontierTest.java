@@ -34,7 +34,7 @@ class ExcursionFrontierTest {
     @Test
     void frontierRunsFromTheTightestExcursionToTheSpecAndIsMonotone() throws Exception {
         BankEvaluator spec = new BankEvaluator(BankSearchTest.scenario(0.05), Optional.empty());
-        ExcursionFrontier.Result f = ExcursionFrontier.run(spec, BankSearchTest.PARTS, BankSearchTest.MAX, EACH, 5,
+        ExcursionFrontier.Result f = ExcursionFrontier.run(spec, breakwater.design.Candidates.of(BankSearchTest.PARTS), BankSearchTest.MAX, EACH, 5,
                 (search, judge, s, start) -> search.run(s, start), () -> false);
         assertThat(f.points()).hasSize(5);
         assertThat(f.points().get(0).limitV()).isEqualTo(f.tightestV());
@@ -65,7 +65,7 @@ class ExcursionFrontierTest {
         BankEvaluator spec = new BankEvaluator(BankSearchTest.scenario(0.05), Optional.empty());
         CandidateJudge judge = new CandidateJudge(spec, BankSearchTest.PARTS);
         int[] step = {0};
-        ExcursionFrontier.Result f = ExcursionFrontier.run(spec, BankSearchTest.PARTS, BankSearchTest.MAX, EACH, 4,
+        ExcursionFrontier.Result f = ExcursionFrontier.run(spec, breakwater.design.Candidates.of(BankSearchTest.PARTS), BankSearchTest.MAX, EACH, 4,
                 (search, j, s, start) -> {
                     if (step[0]++ < 2) {
                         return search.run(s, start);
@@ -86,7 +86,7 @@ class ExcursionFrontierTest {
     void stoppedRunFillsTheRestWithoutSearching() throws Exception {
         BankEvaluator spec = new BankEvaluator(BankSearchTest.scenario(0.05), Optional.empty());
         int[] step = {0};
-        ExcursionFrontier.Result f = ExcursionFrontier.run(spec, BankSearchTest.PARTS, BankSearchTest.MAX, EACH, 3,
+        ExcursionFrontier.Result f = ExcursionFrontier.run(spec, breakwater.design.Candidates.of(BankSearchTest.PARTS), BankSearchTest.MAX, EACH, 3,
                 (search, j, s, start) -> {
                     step[0]++;
                     return search.run(s, start);
