@@ -63,8 +63,8 @@ public final class ConsoleReport {
         line(b, "", "V_min " + volts(wc.minVoltageV()) + " (limit " + volts(wc.lowerLimitV()) + "), V_max "
                 + volts(wc.maxVoltageV()) + " (limit " + volts(wc.upperLimitV()) + "), margin "
                 + format(wc.marginV(), VOLTAGE) + (wc.passes() ? "  PASS" : "  FAIL"));
-        line(b, "", String.format(Locale.ROOT, "rogue factor %.2f: the worst excursion is %.2f × ΔI·Z_t (%s)",
-                wc.rogueFactor(), wc.rogueFactor(), format(r.currentStepA() * r.targetImpedanceOhms(), VOLTAGE)));
+        line(b, "", String.format(Locale.ROOT, "worst-case ratio %.2f: worst excursion / ΔI·Z_t (ΔI·Z_t = %s)",
+                wc.worstCaseRatio(), format(r.currentStepA() * r.targetImpedanceOhms(), VOLTAGE)));
         b.append('\n');
         var m = e.impedance();
         line(b, "Impedance", "peak " + format(m.peakOhms(), RESISTANCE) + " at " + format(m.peakHz(), FREQUENCY)

@@ -75,7 +75,7 @@ public final class ReportBuilder {
         keys.add(new ReportModel.KeyFigure("V_min / V_max", ConsoleReport.volts(wc.minVoltageV()) + " / "
                 + ConsoleReport.volts(wc.maxVoltageV()), wcTone));
         keys.add(new ReportModel.KeyFigure("Margin to the limits", format(wc.marginV(), VOLTAGE), wcTone));
-        keys.add(new ReportModel.KeyFigure("Rogue factor", String.format(Locale.ROOT, "%.2f × ΔI·Z_t", wc.rogueFactor())));
+        keys.add(new ReportModel.KeyFigure("Worst-case ratio", String.format(Locale.ROOT, "%.2f × ΔI·Z_t", wc.worstCaseRatio())));
         keys.add(new ReportModel.KeyFigure("Peak |Z|", format(m.peakOhms(), RESISTANCE) + " at "
                 + format(m.peakHz(), FREQUENCY, 4) + String.format(Locale.ROOT, " (%.2f × Z_t)", m.peakOverTarget()),
                 s.requireTarget() ? (m.underTarget() ? ReportModel.Tone.GOOD : ReportModel.Tone.BAD) : ReportModel.Tone.NEUTRAL));
@@ -137,8 +137,8 @@ public final class ReportBuilder {
                         + format(r.currentStepA() * r.targetImpedanceOhms(), VOLTAGE)
                         + "; a load that switches at the rhythm of the anti-resonances piles their ringing up, which is "
                         + "why the worst case can be several times larger. Here it is "
-                        + String.format(Locale.ROOT, "%.2f", wc.rogueFactor()) + " × ΔI·Z_t (the rogue factor)"
-                        + (wc.rogueFactor() < 1 ? ": this bank keeps |Z| well under the target, so it stays inside the promise."
+                        + String.format(Locale.ROOT, "%.2f", wc.worstCaseRatio()) + " × ΔI·Z_t (the worst-case ratio: worst excursion / ΔI·Z_t)"
+                        + (wc.worstCaseRatio() < 1 ? ": this bank keeps |Z| well under the target, so it stays inside the promise."
                         : ": the target impedance alone would have promised too little.")));
         double window = closeUpWindowS(m, r.edgeTimeS(), run.droop());
         WaveformSeries close = crop("worst-case droop pattern, close-up", run.droop(), window);

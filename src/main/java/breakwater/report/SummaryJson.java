@@ -67,11 +67,11 @@ public final class SummaryJson {
         w.put("upper_limit_v", wc.upperLimitV());
         w.put("margin_v", wc.marginV());
         w.put("passes", wc.passes());
-        w.put("rogue_factor", wc.rogueFactor());
+        w.put("worst_case_ratio", wc.worstCaseRatio());
         w.put("edge_time_s", r.edgeTimeS());
         w.put("droop_ohm", e.worstCase().droopOhms());
         w.put("overshoot_ohm", e.worstCase().overshootOhms());
-        root.put("rogue_factor", wc.rogueFactor());
+        root.put("worst_case_ratio", wc.worstCaseRatio());
 
         var m = e.impedance();
         ObjectNode imp = root.putObject("impedance");
