@@ -74,21 +74,26 @@ public final class ConsoleReport {
         if (m.antiResonances().isEmpty()) {
             line(b, "", "no anti-resonance in the band");
         } else {
-            b.append(String.format(Locale.ROOT, "  %-14s %10s %8s %6s   %-36s %7s%n", "anti-resonance", "|Z|", "|Z|/Z_t",
-                    "Q", "load ΔI ringing it: step / sine / square", "cycles"));
+            b.append(String.format(Locale.ROOT, "  %-14s %10s %8s %6s   %s%n", "", "", "", "",
+                    "response to a load swinging by ΔI:"));
+            b.append(String.format(Locale.ROOT, "  %-14s %10s %8s %6s   %9s %14s %16s %15s%n", "anti-resonance", "|Z|",
+                    "|Z|/Z_t", "Q", "ΔI step", "resonant sine", "resonant square", "cycles to 95 %"));
             for (int i = 0; i < m.antiResonances().size(); i++) {
                 AntiResonance a = m.antiResonances().get(i);
                 var rf = e.resonances().get(i);
-            var rr = rf.response();
+                var rr = rf.response();
                 double dI = r.currentStepA();
-                String ring = !rf.rings() ? "(no ringing mode)"
-                        : format(dI * rf.ownStepPeakOhms(), VOLTAGE) + " / " + format(dI * rr.sineAmplitudeOhms(), VOLTAGE)
-                        + " / " + format(dI * rr.squareAmplitudeOhms(), VOLTAGE);
-                b.append(String.format(Locale.ROOT, "  %-14s %10s %8.2f %6.2f   %-36s %7s%n",
+                boolean rings = rf.rings();
+                b.append(String.format(Locale.ROOT, "  %-14s %10s %8.2f %6.2f   %9s %14s %16s %15s%n",
                         format(a.frequencyHz(), FREQUENCY, 4), format(a.impedanceOhms(), RESISTANCE),
-                        a.impedanceOhms() / m.targetOhms(), a.q(), ring,
+                        a.impedanceOhms() / m.targetOhms(), a.q(),
+                        rings ? format(dI * rf.ownStepPeakOhms(), VOLTAGE) : "-",
+                        rings ? format(dI * rr.sineAmplitudeOhms(), VOLTAGE) : "-",
+                        rings ? format(dI * rr.squareAmplitudeOhms(), VOLTAGE) : "-",
                         rr.cyclesTo95Percent() > 0 ? Integer.toString(rr.cyclesTo95Percent()) : "-"));
             }
+            b.append("  (square: a 50 % square wave at the resonance; cycles to 95 %: cycles of resonant drive until "
+                    + "the sine response reaches 95 % of its steady state; - where no mode rings)\n");
         }
         return b.toString();
     }

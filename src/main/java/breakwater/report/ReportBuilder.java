@@ -109,7 +109,7 @@ public final class ReportBuilder {
             var rf = e.resonances().get(i);
             var rr = rf.response();
             double dI = r.currentStepA();
-            boolean rings = !!rf.rings();
+            boolean rings = rf.rings();
             resRows.add(List.of(format(a.frequencyHz(), FREQUENCY, 4), format(a.impedanceOhms(), RESISTANCE),
                     String.format(Locale.ROOT, "%.2f", a.impedanceOhms() / m.targetOhms()),
                     String.format(Locale.ROOT, "%.2f", a.q()),
@@ -120,11 +120,13 @@ public final class ReportBuilder {
                     rr.cyclesTo95Percent() > 0 ? Integer.toString(rr.cyclesTo95Percent()) : "-"));
         }
         ReportModel.Table resonances = new ReportModel.Table(
-                "Anti-resonances in the band (local maxima of |Z|) and how hard a load swinging by ΔI rings each: "
-                        + "its step response peak, the steady-state amplitude under a sine and under a 50 % square "
-                        + "wave at the resonance, and the cycles of resonant drive needed to reach 95 % of it. "
+                "Anti-resonances in the band (local maxima of |Z|) and the rail's response to a load swinging by ΔI: "
+                        + "to a ΔI step (the peak of the mode ringing there), to a resonant sine and to a resonant 50 % "
+                        + "square wave (steady-state amplitude), and the cycles of resonant drive until the sine "
+                        + "response reaches 95 % of its steady state. "
                         + "Q is the sharpness of the |Z| peak; pole Q the damping of the mode that rings there.",
-                List.of("frequency", "|Z|", "|Z| / Z_t", "Q", "pole Q", "step peak", "sine", "square", "cycles to 95 %"),
+                List.of("frequency", "|Z|", "|Z| / Z_t", "Q", "pole Q", "response to a ΔI step", "to a resonant sine",
+                        "to a resonant 50 % square", "cycles to 95 %"),
                 resRows);
 
         List<ReportModel.Section> sections = new ArrayList<>();
