@@ -69,7 +69,7 @@ public final class ConsoleReport {
         var m = e.impedance();
         line(b, "Impedance", "peak " + format(m.peakOhms(), RESISTANCE) + " at " + format(m.peakHz(), FREQUENCY)
                 + String.format(Locale.ROOT, " (%.2f × target)", m.peakOverTarget())
-                + String.format(Locale.ROOT, ", ripple %.2f dB", m.rippleDb())
+                + String.format(Locale.ROOT, ", flatness %.2f dB (max/min |Z|)", m.flatnessDb())
                 + " over " + format(scenario.band().fromHz(), FREQUENCY) + " .. " + format(scenario.band().toHz(), FREQUENCY));
         if (m.antiResonances().isEmpty()) {
             line(b, "", "no anti-resonance in the band");

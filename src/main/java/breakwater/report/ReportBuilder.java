@@ -79,7 +79,7 @@ public final class ReportBuilder {
         keys.add(new ReportModel.KeyFigure("Peak |Z|", format(m.peakOhms(), RESISTANCE) + " at "
                 + format(m.peakHz(), FREQUENCY, 4) + String.format(Locale.ROOT, " (%.2f × Z_t)", m.peakOverTarget()),
                 s.requireTarget() ? (m.underTarget() ? ReportModel.Tone.GOOD : ReportModel.Tone.BAD) : ReportModel.Tone.NEUTRAL));
-        keys.add(new ReportModel.KeyFigure("Ripple in the band", String.format(Locale.ROOT, "%.2f dB", m.rippleDb())));
+        keys.add(new ReportModel.KeyFigure("Flatness in the band (max/min |Z|)", String.format(Locale.ROOT, "%.2f dB", m.flatnessDb())));
         keys.add(new ReportModel.KeyFigure("Cost per board", ConsoleReport.money(e.cost().total())
                 + (currency.isEmpty() ? "" : " " + currency)));
         keys.add(new ReportModel.KeyFigure("Parts", e.bank().totalParts() + " (" + e.bank().distinctParts() + " types)",

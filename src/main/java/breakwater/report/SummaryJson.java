@@ -80,7 +80,7 @@ public final class SummaryJson {
         imp.put("peak_over_target", m.peakOverTarget());
         imp.put("min_ohm", m.minOhms());
         imp.put("min_hz", m.minHz());
-        imp.put("ripple_db", m.rippleDb());
+        imp.put("flatness_db", m.flatnessDb());
         imp.put("dc_resistance_ohm", e.network().dcResistanceOhms());
         ArrayNode ar = root.putArray("anti_resonances");
         for (int i = 0; i < m.antiResonances().size(); i++) {

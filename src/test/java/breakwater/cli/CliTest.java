@@ -135,7 +135,7 @@ class CliTest {
         JsonNode s = new ObjectMapper().readTree(out.resolve("summary.json").toFile());
         for (String key : new String[] {"rail.target_impedance_ohm", "rail.current_step_a", "worst_case.droop_v",
             "worst_case.overshoot_v", "worst_case.min_voltage_v", "worst_case.max_voltage_v", "worst_case.passes",
-            "impedance.peak_ohm", "impedance.peak_hz", "impedance.ripple_db", "cost_total", "total_parts",
+            "impedance.peak_ohm", "impedance.peak_hz", "impedance.flatness_db", "cost_total", "total_parts",
             "distinct_parts", "worst_case_ratio"}) {
             JsonNode n = s;
             for (String part : key.split("\\.")) {

@@ -295,7 +295,7 @@ class ModesCliTest {
         assertThat(at(s, "footprints").get(1).path("name").asText()).isEqualTo("via-in-pad");
         for (JsonNode f : at(s, "footprints")) {
             assertKeys(f, "name", "cost_total", "total_parts", "bank", "worst_case.droop_v", "worst_case.overshoot_v",
-                    "worst_case.passes", "impedance.peak_ohm", "impedance.ripple_db");
+                    "worst_case.passes", "impedance.peak_ohm", "impedance.flatness_db");
             assertKeys(f.path("bank").get(0), "part", "count");
         }
         String html = Files.readString(out.resolve("report.html"));
