@@ -11,7 +11,7 @@ package breakwater.design;
  * @param boardExcess       parts (or distinct types) beyond the board limits, summed over limits
  * @param targetExcess      max over the band of |Z|/Z_t − 1, or 0 when under target (only when required)
  * @param costTotal         cost per board
- * @param flatnessDb          20·log10(max/min |Z|) in the band, on the solver grid
+ * @param flatnessDb        20·log10(max/min |Z|) in the band, on the solver grid
  * @param peakOverTarget    peak |Z| / Z_t in the band, on the solver grid
  * @param totalParts        parts placed
  */
