@@ -21,7 +21,7 @@ import java.util.concurrent.Callable;
             "For each footprint (default: every [footprint.NAME] of the scenario, in",
             "file order) solves for the cheapest bank under that footprint's mounting inductances, or with",
             "--bank judges the given bank under each, and shows cost, parts, worst droop and overshoot,",
-            "margin, ripple and peak |Z| side by side; the report overlays their impedance and worst case.",
+            "margin, flatness and peak |Z| side by side; the report overlays their impedance and worst case.",
             "The name 'catalog' stands for the catalog's own mount_inductance column.",
             "The time limit is shared: each footprint's search gets an equal part of it.",
             "The result files (bom.csv, ...) describe the cheapest bank that meets the spec (else the first).",

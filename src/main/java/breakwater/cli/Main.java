@@ -2,6 +2,7 @@ package breakwater.cli;
 
 import breakwater.diagnostic.Diagnostic;
 import breakwater.diagnostic.InputException;
+import breakwater.diagnostic.Suggestions;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -58,9 +59,16 @@ public final class Main implements Runnable {
         CommandLine.Model.OptionSpec single = compare.findOption("--footprint");
         compare.remove(single);
         compare.addOption(single.toBuilder().hidden(true).build());
+        // every command advertises -V/--version (mixinStandardHelpOptions); each must answer it
+        for (CommandLine sub : cl.getSubcommands().values()) {
+            sub.getCommandSpec().versionProvider(new Version());
+        }
         cl.setExitCodeExceptionMapper(Main::exitCodeFor);
         cl.setParameterExceptionHandler((ex, a) -> {
             CommandLine c = ex.getCommandLine();
+            if (unknownCommand(ex, cl)) {
+                return ExitCodes.USAGE;
+            }
             c.getErr().println("breakwater: " + ex.getMessage());
             CommandLine.UnmatchedArgumentException.printSuggestions(ex, c.getErr());
             c.getErr().println("Try 'breakwater " + (c == cl ? "" : c.getCommandName() + " ") + "--help'.");
@@ -88,6 +96,26 @@ public final class Main implements Runnable {
             return code;
         });
         return cl.execute(args);
+    }
+
+    /**
+     * A first word that names no command: "unknown command 'x'", the closest command name if one is
+     * near, and the list of commands. Returns false (and prints nothing) for any other usage error.
+     */
+    private static boolean unknownCommand(CommandLine.ParameterException ex, CommandLine top) {
+        if (!(ex instanceof CommandLine.UnmatchedArgumentException u) || ex.getCommandLine() != top
+                || u.getUnmatched().isEmpty() || u.getUnmatched().get(0).startsWith("-")) {
+            return false;
+        }
+        String word = u.getUnmatched().get(0);
+        PrintWriter err = top.getErr();
+        err.println("breakwater: unknown command '" + word + "'."
+                + Suggestions.closest(word, top.getSubcommands().keySet())
+                        .map(s -> " Did you mean '" + s + "'?").orElse(""));
+        err.println("The commands are " + String.join(", ", top.getSubcommands().keySet())
+                + "; try 'breakwater --help'.");
+        err.flush();
+        return true;
     }
 
     static int exitCodeFor(Throwable ex) {

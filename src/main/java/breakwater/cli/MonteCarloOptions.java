@@ -10,15 +10,15 @@ import java.util.Optional;
 /** {@code --monte-carlo N}, {@code --mc-seed}, {@code --spread}: part-to-part spread of the chosen bank. */
 final class MonteCarloOptions {
     @Option(names = "--monte-carlo", paramLabel = "N",
-            description = {"After the bank is chosen, judge N variants of it with parts drawn within their "
-                    + "tolerances (uniform): capacitance within the catalog's tolerance column, else by "
+            description = {"Also judge N Monte Carlo samples of the bank (checked or found), each with its parts "
+                    + "drawn within their tolerances (uniform): capacitance within the catalog's tolerance column, else by "
                     + "dielectric C0G 5 %%, X7R 10 %%, X5R 20 %%, polymer/tantalum/other 20 %%; ESR and ESL within "
                     + "--spread. All parts of one type move together (one reel: the pessimistic choice). "
                     + "Reports the worst droop and overshoot distribution (p50, p95, p99, max) and the yield."})
     int samples;
 
     @Option(names = "--mc-seed", paramLabel = "N",
-            description = "Seed of the Monte Carlo draws (default: [solver] seed, else 1); same seed, same samples.")
+            description = "Seed of the Monte Carlo samples (default: [solver] seed, else 1); same seed, same samples.")
     Long seed;
 
     @Option(names = "--spread", paramLabel = "PCT", converter = PercentConverter.class, defaultValue = "20",

@@ -22,6 +22,8 @@ final class Searches implements SearchRunner, AutoCloseable {
     private final PrintWriter err;
     private final boolean quiet;
     private final Optional<StopOnInterrupt> guard;
+    /** The step last announced: a frontier's searches print their progress in the frontier's terms. */
+    private volatile SearchStage stage;
 
     /** With Ctrl-C handling when {@code stoppable} (searches), without for a run that only judges. */
     Searches(PrintWriter err, boolean quiet, boolean stoppable) {
@@ -39,7 +41,7 @@ final class Searches implements SearchRunner, AutoCloseable {
                 try {
                     while (!Thread.currentThread().isInterrupted()) {
                         Thread.sleep(1000);
-                        search.progress().ifPresent(p -> say(ProgressText.line(p, judge)));
+                        search.progress().ifPresent(p -> say(line(p, judge)));
                     }
                 } catch (InterruptedException e) {
                     // search finished
@@ -57,8 +59,17 @@ final class Searches implements SearchRunner, AutoCloseable {
         }
     }
 
+    private String line(breakwater.optimize.SearchProgress p, BankEvaluator judge) {
+        return switch (stage) {
+            case SearchStage.TightestSearch t -> ProgressText.frontierLine(p, judge, true);
+            case SearchStage.LimitSearch l -> ProgressText.frontierLine(p, judge, false);
+            case null, default -> ProgressText.line(p, judge);
+        };
+    }
+
     @Override
     public void announce(SearchStage stage) {
+        this.stage = stage;
         if (!quiet) {
             say(ProgressText.stage(stage));
         }

@@ -41,7 +41,7 @@ final class TrimCommand implements Callable<Integer> {
             description = "Existing bank to cost down (CSV: part,count). Default: the scenario's [existing] file.")
     Path bankFile;
 
-    @Option(names = "--keep", paramLabel = "RULE", defaultValue = "margin",
+    @Option(names = "--keep", paramLabel = "RULE", defaultValue = "margin", converter = KeepConverter.class,
             description = "What the cheaper bank must keep: margin (worst droop and overshoot no worse than the "
                     + "existing bank's) or spec (merely inside the tolerance). Default: ${DEFAULT-VALUE}.")
     CostDown.Keep keep;
@@ -57,6 +57,20 @@ final class TrimCommand implements Callable<Integer> {
 
     @Mixin
     MonteCarloOptions monteCarlo;
+
+    /** {@code margin} or {@code spec}, in any case; the refusal names them as the help does. */
+    static final class KeepConverter implements picocli.CommandLine.ITypeConverter<CostDown.Keep> {
+        @Override
+        public CostDown.Keep convert(String value) {
+            for (CostDown.Keep k : CostDown.Keep.values()) {
+                if (k.name().equalsIgnoreCase(value.strip())) {
+                    return k;
+                }
+            }
+            throw new picocli.CommandLine.TypeConversionException("'" + value
+                    + "' is not a keep rule; use margin or spec");
+        }
+    }
 
     @Override
     public Integer call() throws Exception {

@@ -180,7 +180,7 @@ public final class CandidateJudge {
             min = Math.min(min, m);
         }
         double target = rail.targetImpedanceOhms();
-        double ripple = 20 * Math.log10(peak / min);
+        double flatness = 20 * Math.log10(peak / min);
 
         // the bank's network and board figures straight from the counts (same rules as NetworkBuilder and
         // BoardCheck, which the full evaluation uses; a test holds the two paths together)
@@ -291,6 +291,6 @@ public final class CandidateJudge {
                     Double.POSITIVE_INFINITY);
         }
         return new Judgement(wc.droopV(), wc.overshootV(), wc.droopExcessV(), wc.overshootExcessV(), boardExcess,
-                targetExcess, cost, ripple, peak / target, total);
+                targetExcess, cost, flatness, peak / target, total);
     }
 }

@@ -11,12 +11,12 @@ package breakwater.design;
  * @param boardExcess       parts (or distinct types) beyond the board limits, summed over limits
  * @param targetExcess      max over the band of |Z|/Z_t − 1, or 0 when under target (only when required)
  * @param costTotal         cost per board
- * @param rippleDb          20·log10(max/min |Z|) in the band, on the solver grid
+ * @param flatnessDb        20·log10(max/min |Z|) in the band, on the solver grid
  * @param peakOverTarget    peak |Z| / Z_t in the band, on the solver grid
  * @param totalParts        parts placed
  */
 public record Judgement(double droopV, double overshootV, double droopExcessV, double overshootExcessV,
-                        int boardExcess, double targetExcess, double costTotal, double rippleDb,
+                        int boardExcess, double targetExcess, double costTotal, double flatnessDb,
                         double peakOverTarget, int totalParts) {
 
     /** Meets the spec by {@link Verdict#meetsSpec(double, double, int, boolean)}, the rule the full verdict uses. */

@@ -182,7 +182,7 @@ public final class MonteCarlo {
     }
 
     /**
-     * Draws {@code settings.samples()} variants of {@code bank} and judges each with {@code evaluator}
+     * Draws {@code settings.samples()} samples of {@code bank} and judges each with {@code evaluator}
      * (its limits decide the yield), in parallel on the common fork-join pool.
      *
      * @throws IllegalArgumentException when a part's capacitance tolerance is not in [0, 1)

@@ -15,11 +15,11 @@ import breakwater.scenario.Rail;
  * @param maxVoltageV  V_max
  * @param lowerLimitV  V_nom·(1 − tolerance)
  * @param upperLimitV  V_nom·(1 + tolerance)
- * @param rogueFactor  worst excursion (larger of droop and overshoot) / (ΔI·Z_t): how far the
+ * @param worstCaseRatio worst excursion (larger of droop and overshoot) / (ΔI·Z_t): how far the
  *                     target-impedance promise is off; 1 for an impedance flat at the target
  */
 public record WorstCaseVolts(double droopV, double overshootV, double operatingV, double minVoltageV,
-                               double maxVoltageV, double lowerLimitV, double upperLimitV, double rogueFactor) {
+                               double maxVoltageV, double lowerLimitV, double upperLimitV, double worstCaseRatio) {
 
     /** Figures against the rail's own tolerance band. */
     public static WorstCaseVolts of(Rail rail, double dcResistanceOhms, double droopOhms, double overshootOhms) {

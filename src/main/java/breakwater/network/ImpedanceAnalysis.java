@@ -13,7 +13,7 @@ import java.util.List;
 import java.util.function.DoubleUnaryOperator;
 
 /**
- * Flatness of |Z| across the band: peak, minimum, ripple and anti-resonances.
+ * Flatness of |Z| across the band: peak, minimum, flatness (max/min in dB) and anti-resonances.
  *
  * <p>Extremes are found on the grid, then refined by Brent's method (Commons Math {@link BrentOptimizer})
  * on ln f between the neighbouring grid points, against the network itself. With a relative tolerance of
@@ -130,8 +130,8 @@ public final class ImpedanceAnalysis {
                 minHz = fr;
             }
         }
-        double rippleDb = 20 * Math.log10(peak / min);
-        return new ImpedanceMetrics(targetOhms, peak, peakHz, min, minHz, rippleDb, anti);
+        double flatnessDb = 20 * Math.log10(peak / min);
+        return new ImpedanceMetrics(targetOhms, peak, peakHz, min, minHz, flatnessDb, anti);
     }
 
     /**

@@ -10,11 +10,11 @@ import java.util.List;
  * @param peakHz          where it occurs
  * @param minOhms         smallest |Z| in the band
  * @param minHz           where it occurs
- * @param rippleDb        20·log10(peak / min) in the band
+ * @param flatnessDb      flatness: 20·log10(peak / min) in the band, the max/min ratio of |Z| in dB
  * @param antiResonances  every local maximum of |Z| inside the band, ascending in frequency
  */
 public record ImpedanceMetrics(double targetOhms, double peakOhms, double peakHz, double minOhms, double minHz,
-                               double rippleDb, List<AntiResonance> antiResonances) {
+                               double flatnessDb, List<AntiResonance> antiResonances) {
     public ImpedanceMetrics {
         antiResonances = List.copyOf(antiResonances);
     }

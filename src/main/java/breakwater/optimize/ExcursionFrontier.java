@@ -8,6 +8,8 @@ import breakwater.design.Evaluation;
 import breakwater.design.Limits;
 import breakwater.design.Verdict;
 import breakwater.scenario.Rail;
+import breakwater.units.EngineeringNotation;
+import breakwater.units.Quantity;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -22,13 +24,16 @@ import java.util.function.BooleanSupplier;
  * <p>First a search with an unreachable limit (1 nV) finds the bank closest to it; its worst excursion
  * max(droop, overshoot) is the tightest limit. Then one cost search per limit, tightest first, each
  * warm-started from the previous point's bank when that bank meets the next limit (it always does when it
- * met its own, tighter one). Monotone by construction and checked: a bank that meets a tighter limit
- * meets every looser one, so when a looser limit's search returns a dearer bank than a tighter limit's
- * (or none that meets it), the tighter limit's bank is used instead and the point says so.
+ * met its own, tighter one). Last, each point takes the cheapest bank that any of the searches found and
+ * that meets its limit ({@link #cheapestFound}): a bank that meets a tighter limit meets every looser
+ * one, and a looser limit's bank may keep within a tighter limit too, so cheaper banks are carried both
+ * ways and the point says where its bank came from.
  */
 public final class ExcursionFrontier {
     /** The limit of the first, unreachable search. */
     static final double UNREACHABLE_V = 1e-9;
+    /** Relative widening of the first limit over the smallest excursion found (see {@link #run}). */
+    static final double LIMIT_ROUNDING = 1e-9;
 
     private ExcursionFrontier() {
     }
@@ -126,7 +131,9 @@ public final class ExcursionFrontier {
         Evaluation closest = spec.evaluate(tight.bank());
         double allowed = allowedExcursion(spec, closest.network().dcResistanceOhms());
         double tightest = Math.max(closest.figures().droopV(), closest.figures().overshootV());
-        double lo = Math.min(tightest, allowed);
+        // the first limit is the closest bank's own excursion, widened by a rounding allowance so that the
+        // bank meets it: op − (op − L) need not equal L in floating point
+        double lo = Math.min(tightest * (1 + LIMIT_ROUNDING), allowed);
         int k = lo < allowed ? points : 1;
 
         List<Point> out = new ArrayList<>();
@@ -148,26 +155,59 @@ public final class ExcursionFrontier {
                 found = judge.evaluate(start);
             }
             boolean meets = Verdict.meetsSpec(found, spec.scenario().requireTarget());
-            String note = searched ? "" : "not searched (stopped by the user)";
-            // the cheapest bank of a tighter limit that met it meets this limit too
-            Point cheaperTighter = null;
-            for (Point p : out) {
-                if (p.meetsLimit() && (cheaperTighter == null || p.costTotal() < cheaperTighter.costTotal())) {
-                    cheaperTighter = p;
-                }
-            }
-            if (cheaperTighter != null && (!meets || cheaperTighter.costTotal() < found.cost().total())) {
-                note = String.format(Locale.ROOT, "%s the search returned %s (cost %.4f); the bank of the tighter "
-                                + "limit %.6g V is used: it meets this limit too and is cheaper",
-                        note.isEmpty() ? "" : note + ";", meets ? "a dearer bank" : "no bank meeting this limit",
-                        found.cost().total(), cheaperTighter.limitV()).strip();
-                found = judge.evaluate(cheaperTighter.bank());
-                meets = true;
-            }
-            out.add(new Point(limit, found, meets, searched, evaluations, seconds, note));
+            out.add(new Point(limit, found, meets, searched, evaluations, seconds,
+                    searched ? "" : "not searched (stopped by the user)"));
             previous = found.bank();
         }
+        out = cheapestFound(spec, closest, out);
         return new Result(closest, tightest, allowed, tight.seconds(), out);
+    }
+
+    /**
+     * Each point's bank becomes the cheapest bank any search of the run found that meets its limit: a
+     * bank found for a looser limit whose excursion happens to be within a tighter one serves the tighter
+     * limit too, and a tighter limit's bank serves every looser one. Candidates are every point's bank
+     * and the bank closest to the unreachable limit; a strictly cheaper one that meets the limit replaces
+     * the search's own, and the point's note says which limit's search found it. So costs never rise as
+     * the limit loosens, and no point keeps a bank that another point shows to be beaten.
+     */
+    static List<Point> cheapestFound(BankEvaluator spec, Evaluation closest, List<Point> points) {
+        boolean requireTarget = spec.scenario().requireTarget();
+        record Candidate(Evaluation evaluation, String foundFor) {
+            double excursionV() {
+                return Math.max(evaluation.figures().droopV(), evaluation.figures().overshootV());
+            }
+        }
+        List<Candidate> candidates = new ArrayList<>();
+        candidates.add(new Candidate(closest, "the search for the smallest excursion"));
+        for (Point p : points) {
+            candidates.add(new Candidate(p.evaluation(), "the search for the "
+                    + EngineeringNotation.format(p.limitV(), Quantity.VOLTAGE) + " limit"));
+        }
+        List<Point> out = new ArrayList<>();
+        for (Point p : points) {
+            Point best = p;
+            for (Candidate c : candidates) {
+                boolean cheaper = !best.meetsLimit() || c.evaluation().cost().total() < best.costTotal() - 1e-12;
+                if (!cheaper || c.evaluation().bank().equals(best.bank()) || c.excursionV() > p.limitV()) {
+                    continue;
+                }
+                Evaluation e = judge(spec, p.limitV()).evaluate(c.evaluation().bank());
+                if (!Verdict.meetsSpec(e, requireTarget)) {
+                    continue;
+                }
+                String own = p.meetsLimit()
+                        ? String.format(Locale.ROOT, "a dearer bank (cost %.4f)", p.costTotal())
+                        : "no bank within this limit";
+                String stopped = p.searched() ? "" : "not searched (stopped by the user); ";
+                best = new Point(p.limitV(), e, true, p.searched(), p.evaluations(), p.seconds(),
+                        stopped + (p.searched() ? "this limit's search returned " + own + "; " : "")
+                                + "the bank shown was found by " + c.foundFor()
+                                + ": it keeps within this limit too and is cheaper");
+            }
+            out.add(best);
+        }
+        return out;
     }
 
     /**

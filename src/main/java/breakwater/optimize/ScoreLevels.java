@@ -10,7 +10,7 @@ import breakwater.design.Judgement;
  *       counts) − 10 000 per part beyond a board limit − ppm of |Z| above the target (only when the
  *       scenario requires the target);</li>
  *   <li>soft 0: −cost per board in micro-units of currency;</li>
- *   <li>soft 1: −flatness in milli-dB: ripple in the band plus 20·log10(peak/target);</li>
+ *   <li>soft 1: −flatness in milli-dB: the band's max/min |Z| in dB plus 20·log10(peak/target);</li>
  *   <li>soft 2: −number of parts.</li>
  * </ul>
  */
@@ -24,7 +24,7 @@ final class ScoreLevels {
         long hard = -(microVoltsUp(j.droopExcessV()) + microVoltsUp(j.overshootExcessV())
                 + PER_BOARD_EXCESS * j.boardExcess() + (long) Math.ceil(Math.max(0, j.targetExcess()) * 1e6));
         long cost = -Math.round(j.costTotal() * 1e6);
-        double flat = j.rippleDb() + 20 * Math.log10(Math.max(j.peakOverTarget(), 1e-12));
+        double flat = j.flatnessDb() + 20 * Math.log10(Math.max(j.peakOverTarget(), 1e-12));
         long flatness = -Math.round(flat * 1000);
         return BendableScore.of(new long[] {hard}, new long[] {cost, flatness, -j.totalParts()});
     }

@@ -24,7 +24,7 @@ import static breakwater.units.Quantity.VOLTAGE;
  */
 public final class CompareReport {
     static final List<String> HEADERS = List.of("footprint", "cost", "parts", "worst droop", "worst overshoot",
-            "margin", "ripple", "peak |Z|", "verdict");
+            "margin", "flatness", "peak |Z|", "verdict");
     private static final String ROW = "  %-16s %10s %6s %12s %12s %11s %9s %10s  %s%n";
 
     private CompareReport() {
@@ -55,7 +55,7 @@ public final class CompareReport {
             Evaluation e = row.evaluation();
             table.add(List.of(row.name(), Texts.money(e.cost().total()), Integer.toString(e.bank().totalParts()),
                     format(e.figures().droopV(), VOLTAGE), format(e.figures().overshootV(), VOLTAGE),
-                    format(e.figures().marginV(), VOLTAGE), String.format(Locale.ROOT, "%.2f dB", e.impedance().rippleDb()),
+                    format(e.figures().marginV(), VOLTAGE), String.format(Locale.ROOT, "%.2f dB", e.impedance().flatnessDb()),
                     format(e.impedance().peakOhms(), RESISTANCE), row.meets() ? "meets spec" : "FAILS"));
         }
         return table;
@@ -109,7 +109,7 @@ public final class CompareReport {
             wc.put("passes", e.figures().passes());
             ObjectNode imp = o.putObject("impedance");
             imp.put("peak_ohm", e.impedance().peakOhms());
-            imp.put("ripple_db", e.impedance().rippleDb());
+            imp.put("flatness_db", e.impedance().flatnessDb());
             row.search().ifPresent(s -> o.put("search_time_s", s.seconds()));
         }
     }

@@ -66,32 +66,37 @@ public final class ConsoleReport {
         line(b, "", "V_min " + volts(wc.minVoltageV()) + " (limit " + volts(wc.lowerLimitV()) + "), V_max "
                 + volts(wc.maxVoltageV()) + " (limit " + volts(wc.upperLimitV()) + "), margin "
                 + format(wc.marginV(), VOLTAGE) + (wc.passes() ? "  PASS" : "  FAIL"));
-        line(b, "", String.format(Locale.ROOT, "rogue factor %.2f: the worst excursion is %.2f × ΔI·Z_t (%s)",
-                wc.rogueFactor(), wc.rogueFactor(), format(r.currentStepA() * r.targetImpedanceOhms(), VOLTAGE)));
+        line(b, "", String.format(Locale.ROOT, "worst-case ratio %.2f: worst excursion / ΔI·Z_t (ΔI·Z_t = %s)",
+                wc.worstCaseRatio(), format(r.currentStepA() * r.targetImpedanceOhms(), VOLTAGE)));
         b.append('\n');
         var m = e.impedance();
         line(b, "Impedance", "peak " + format(m.peakOhms(), RESISTANCE) + " at " + format(m.peakHz(), FREQUENCY)
                 + String.format(Locale.ROOT, " (%.2f × target)", m.peakOverTarget())
-                + String.format(Locale.ROOT, ", ripple %.2f dB", m.rippleDb())
+                + String.format(Locale.ROOT, ", flatness %.2f dB (max/min |Z|)", m.flatnessDb())
                 + " over " + format(scenario.band().fromHz(), FREQUENCY) + " .. " + format(scenario.band().toHz(), FREQUENCY));
         if (m.antiResonances().isEmpty()) {
             line(b, "", "no anti-resonance in the band");
         } else {
-            b.append(String.format(Locale.ROOT, "  %-14s %10s %8s %6s   %-36s %7s%n", "anti-resonance", "|Z|", "|Z|/Z_t",
-                    "Q", "load ΔI ringing it: step / sine / square", "cycles"));
+            b.append(String.format(Locale.ROOT, "  %-14s %10s %8s %6s   %s%n", "", "", "", "",
+                    "response to a load swinging by ΔI:"));
+            b.append(String.format(Locale.ROOT, "  %-14s %10s %8s %6s   %9s %14s %16s %15s%n", "anti-resonance", "|Z|",
+                    "|Z|/Z_t", "Q", "ΔI step", "resonant sine", "resonant square", "cycles to 95 %"));
             for (int i = 0; i < m.antiResonances().size(); i++) {
                 AntiResonance a = m.antiResonances().get(i);
                 var rf = e.resonances().get(i);
-            var rr = rf.response();
+                var rr = rf.response();
                 double dI = r.currentStepA();
-                String ring = !rf.rings() ? "(no ringing mode)"
-                        : format(dI * rf.ownStepPeakOhms(), VOLTAGE) + " / " + format(dI * rr.sineAmplitudeOhms(), VOLTAGE)
-                        + " / " + format(dI * rr.squareAmplitudeOhms(), VOLTAGE);
-                b.append(String.format(Locale.ROOT, "  %-14s %10s %8.2f %6.2f   %-36s %7s%n",
+                boolean rings = rf.rings();
+                b.append(String.format(Locale.ROOT, "  %-14s %10s %8.2f %6.2f   %9s %14s %16s %15s%n",
                         format(a.frequencyHz(), FREQUENCY, 4), format(a.impedanceOhms(), RESISTANCE),
-                        a.impedanceOhms() / m.targetOhms(), a.q(), ring,
+                        a.impedanceOhms() / m.targetOhms(), a.q(),
+                        rings ? format(dI * rf.ownStepPeakOhms(), VOLTAGE) : "-",
+                        rings ? format(dI * rr.sineAmplitudeOhms(), VOLTAGE) : "-",
+                        rings ? format(dI * rr.squareAmplitudeOhms(), VOLTAGE) : "-",
                         rr.cyclesTo95Percent() > 0 ? Integer.toString(rr.cyclesTo95Percent()) : "-"));
             }
+            b.append("  (square: a 50 % square wave at the resonance; cycles to 95 %: cycles of resonant drive until "
+                    + "the sine response reaches 95 % of its steady state; - where no mode rings)\n");
         }
         return b.toString();
     }

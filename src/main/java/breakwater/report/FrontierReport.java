@@ -115,8 +115,9 @@ public final class FrontierReport {
         String intro = String.format(Locale.ROOT, "The cheapest bank for each excursion limit (worst droop and worst "
                         + "overshoot each at most the limit), from the smallest worst excursion the search reached, %s, "
                         + "up to what the spec allows, %s. Each search had %s (the %s limit split over %d searches) and "
-                        + "started from the previous, tighter limit's bank. A tighter limit never costs less here: where "
-                        + "a search returned a dearer bank, the tighter limit's bank is used (see the notes).",
+                        + "started from the previous, tighter limit's bank. Each limit shows the cheapest bank that any of "
+                        + "the searches found within it, whichever limit's search found it (the notes say so), so a "
+                        + "tighter limit never costs less.",
                 format(f.tightestV(), VOLTAGE), format(f.allowedV(), VOLTAGE), Texts.duration(r.each().timeLimit()),
                 Texts.duration(r.all().timeLimit()), pts.size() + 1) + (asymmetric.isEmpty() ? "" : " Note: " + asymmetric + ".");
         return new ReportModel.Section("Cost against worst excursion", List.of(intro),

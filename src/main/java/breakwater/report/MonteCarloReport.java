@@ -85,7 +85,7 @@ public final class MonteCarloReport {
         String overChart = HistogramChart.svg(new Histogram("worst overshoot", "V", r.overshootV(),
                 bins(s.samples()), List.of(new Limit("allowed overshoot " + format(allowedOver, VOLTAGE),
                 allowedOver))));
-        String text = String.format(Locale.ROOT, "%d banks were drawn (seed %d, %.1f s). In each, every part type's "
+        String text = String.format(Locale.ROOT, "%d Monte Carlo samples were judged (seed %d, %.1f s). In each sample, every part type's "
                         + "capacitance is drawn uniformly within its tolerance and its ESR and ESL within ±%s; all "
                         + "parts of one type move together, as a batch from one reel would (the pessimistic "
                         + "choice: independent parts would partly cancel). Mounting inductance is kept. Each "

@@ -77,6 +77,24 @@ public final class ProgressText {
                 j.totalParts(), p.evaluationsPerSecond());
     }
 
+    /**
+     * One progress line of a frontier search, in the terms of the frontier: the worst excursion of the
+     * best bank so far, against the limit being searched; during the search for the smallest excursion
+     * there is no limit to show (that search runs against an unreachable one).
+     */
+    public static String frontierLine(SearchProgress p, BankEvaluator judge, boolean smallestExcursion) {
+        Judgement j = p.best();
+        String currency = Texts.currency(judge.scenario().cost().currency());
+        double excursion = Math.max(j.droopV(), j.overshootV());
+        String what = smallestExcursion
+                ? "smallest worst excursion so far " + format(excursion, VOLTAGE)
+                : (j.feasible() ? "within the limit" : "not yet within the limit") + "; worst excursion "
+                + format(excursion, VOLTAGE) + " (limit " + format(judge.operatingPointV() - judge.limits().lowerV(),
+                VOLTAGE) + ")";
+        return String.format(Locale.ROOT, "  %6.1f s  %s; cost %.4f%s; %d parts; %.0f banks/s", p.elapsedS(), what,
+                j.costTotal(), currency, j.totalParts(), p.evaluationsPerSecond());
+    }
+
     /** "meets spec" or what is still missing, e.g. "misses by 3.2 mV (droop)". */
     static String inWords(Judgement j) {
         if (j.feasible()) {

@@ -75,11 +75,11 @@ public final class ReportBuilder {
         keys.add(new ReportModel.KeyFigure("V_min / V_max", ConsoleReport.volts(wc.minVoltageV()) + " / "
                 + ConsoleReport.volts(wc.maxVoltageV()), wcTone));
         keys.add(new ReportModel.KeyFigure("Margin to the limits", format(wc.marginV(), VOLTAGE), wcTone));
-        keys.add(new ReportModel.KeyFigure("Rogue factor", String.format(Locale.ROOT, "%.2f × ΔI·Z_t", wc.rogueFactor())));
+        keys.add(new ReportModel.KeyFigure("Worst-case ratio", String.format(Locale.ROOT, "%.2f × ΔI·Z_t", wc.worstCaseRatio())));
         keys.add(new ReportModel.KeyFigure("Peak |Z|", format(m.peakOhms(), RESISTANCE) + " at "
                 + format(m.peakHz(), FREQUENCY, 4) + String.format(Locale.ROOT, " (%.2f × Z_t)", m.peakOverTarget()),
                 s.requireTarget() ? (m.underTarget() ? ReportModel.Tone.GOOD : ReportModel.Tone.BAD) : ReportModel.Tone.NEUTRAL));
-        keys.add(new ReportModel.KeyFigure("Ripple in the band", String.format(Locale.ROOT, "%.2f dB", m.rippleDb())));
+        keys.add(new ReportModel.KeyFigure("Flatness in the band (max/min |Z|)", String.format(Locale.ROOT, "%.2f dB", m.flatnessDb())));
         keys.add(new ReportModel.KeyFigure("Cost per board", ConsoleReport.money(e.cost().total())
                 + (currency.isEmpty() ? "" : " " + currency)));
         keys.add(new ReportModel.KeyFigure("Parts", e.bank().totalParts() + " (" + e.bank().distinctParts() + " types)",
@@ -109,7 +109,7 @@ public final class ReportBuilder {
             var rf = e.resonances().get(i);
             var rr = rf.response();
             double dI = r.currentStepA();
-            boolean rings = !!rf.rings();
+            boolean rings = rf.rings();
             resRows.add(List.of(format(a.frequencyHz(), FREQUENCY, 4), format(a.impedanceOhms(), RESISTANCE),
                     String.format(Locale.ROOT, "%.2f", a.impedanceOhms() / m.targetOhms()),
                     String.format(Locale.ROOT, "%.2f", a.q()),
@@ -120,11 +120,13 @@ public final class ReportBuilder {
                     rr.cyclesTo95Percent() > 0 ? Integer.toString(rr.cyclesTo95Percent()) : "-"));
         }
         ReportModel.Table resonances = new ReportModel.Table(
-                "Anti-resonances in the band (local maxima of |Z|) and how hard a load swinging by ΔI rings each: "
-                        + "its step response peak, the steady-state amplitude under a sine and under a 50 % square "
-                        + "wave at the resonance, and the cycles of resonant drive needed to reach 95 % of it. "
+                "Anti-resonances in the band (local maxima of |Z|) and the rail's response to a load swinging by ΔI: "
+                        + "to a ΔI step (the peak of the mode ringing there), to a resonant sine and to a resonant 50 % "
+                        + "square wave (steady-state amplitude), and the cycles of resonant drive until the sine "
+                        + "response reaches 95 % of its steady state. "
                         + "Q is the sharpness of the |Z| peak; pole Q the damping of the mode that rings there.",
-                List.of("frequency", "|Z|", "|Z| / Z_t", "Q", "pole Q", "step peak", "sine", "square", "cycles to 95 %"),
+                List.of("frequency", "|Z|", "|Z| / Z_t", "Q", "pole Q", "response to a ΔI step", "to a resonant sine",
+                        "to a resonant 50 % square", "cycles to 95 %"),
                 resRows);
 
         List<ReportModel.Section> sections = new ArrayList<>();
@@ -137,8 +139,8 @@ public final class ReportBuilder {
                         + format(r.currentStepA() * r.targetImpedanceOhms(), VOLTAGE)
                         + "; a load that switches at the rhythm of the anti-resonances piles their ringing up, which is "
                         + "why the worst case can be several times larger. Here it is "
-                        + String.format(Locale.ROOT, "%.2f", wc.rogueFactor()) + " × ΔI·Z_t (the rogue factor)"
-                        + (wc.rogueFactor() < 1 ? ": this bank keeps |Z| well under the target, so it stays inside the promise."
+                        + String.format(Locale.ROOT, "%.2f", wc.worstCaseRatio()) + " × ΔI·Z_t (the worst-case ratio: worst excursion / ΔI·Z_t)"
+                        + (wc.worstCaseRatio() < 1 ? ": this bank keeps |Z| well under the target, so it stays inside the promise."
                         : ": the target impedance alone would have promised too little.")));
         double window = closeUpWindowS(m, r.edgeTimeS(), run.droop());
         WaveformSeries close = crop("worst-case droop pattern, close-up", run.droop(), window);

@@ -67,11 +67,11 @@ public final class SummaryJson {
         w.put("upper_limit_v", wc.upperLimitV());
         w.put("margin_v", wc.marginV());
         w.put("passes", wc.passes());
-        w.put("rogue_factor", wc.rogueFactor());
+        w.put("worst_case_ratio", wc.worstCaseRatio());
         w.put("edge_time_s", r.edgeTimeS());
         w.put("droop_ohm", e.worstCase().droopOhms());
         w.put("overshoot_ohm", e.worstCase().overshootOhms());
-        root.put("rogue_factor", wc.rogueFactor());
+        root.put("worst_case_ratio", wc.worstCaseRatio());
 
         var m = e.impedance();
         ObjectNode imp = root.putObject("impedance");
@@ -80,7 +80,7 @@ public final class SummaryJson {
         imp.put("peak_over_target", m.peakOverTarget());
         imp.put("min_ohm", m.minOhms());
         imp.put("min_hz", m.minHz());
-        imp.put("ripple_db", m.rippleDb());
+        imp.put("flatness_db", m.flatnessDb());
         imp.put("dc_resistance_ohm", e.network().dcResistanceOhms());
         ArrayNode ar = root.putArray("anti_resonances");
         for (int i = 0; i < m.antiResonances().size(); i++) {

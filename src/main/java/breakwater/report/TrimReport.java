@@ -94,8 +94,8 @@ public final class TrimReport {
                 List.of("worst overshoot", format(was.overshootV(), VOLTAGE), format(now.overshootV(), VOLTAGE)),
                 List.of("margin to the limits", format(was.marginV(), VOLTAGE), format(now.marginV(), VOLTAGE)),
                 List.of("peak |Z|", format(old.impedance().peakOhms(), RESISTANCE), format(e.impedance().peakOhms(), RESISTANCE)),
-                List.of("ripple in the band", String.format(Locale.ROOT, "%.2f dB", old.impedance().rippleDb()),
-                        String.format(Locale.ROOT, "%.2f dB", e.impedance().rippleDb())));
+                List.of("flatness (max/min |Z|)", String.format(Locale.ROOT, "%.2f dB", old.impedance().flatnessDb()),
+                        String.format(Locale.ROOT, "%.2f dB", e.impedance().flatnessDb())));
         String intro = r.unchanged()
                 ? "The existing bank is returned unchanged: " + r.reason() + "."
                 : String.format(Locale.ROOT, "Keeping %s, the trimmed bank saves %s%s per board (%.2f%s per 1,000 "

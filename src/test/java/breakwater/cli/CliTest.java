@@ -48,6 +48,45 @@ class CliTest {
     }
 
     @Test
+    void everyCommandThatAdvertisesVersionPrintsIt() {
+        Run top = run("--version");
+        assertThat(top.code()).isZero();
+        assertThat(top.out()).startsWith("breakwater ");
+        for (String command : new String[] {"solve", "check", "trim", "compare", "frontier"}) {
+            Run help = run(command, "--help");
+            assertThat(help.out()).as(command + " --help").contains("-V, --version");
+            Run r = run(command, "--version");
+            assertThat(r.code()).as(command + " --version").isZero();
+            assertThat(r.out()).as(command + " --version").isEqualTo(top.out());
+        }
+    }
+
+    @Test
+    void anUnknownCommandIsNamedWithTheClosestOne() {
+        Run r = run("slove", DEMO.toString());
+        assertThat(r.code()).isEqualTo(ExitCodes.USAGE);
+        assertThat(r.err()).contains("unknown command 'slove'").contains("Did you mean 'solve'?")
+                .contains("check").doesNotContain("Unmatched").doesNotContain("index");
+        Run far = run("xyzzy");
+        assertThat(far.err()).contains("unknown command 'xyzzy'").doesNotContain("Did you mean");
+    }
+
+    @Test
+    void aBadKeepRuleNamesTheRulesAsTheHelpWritesThem() {
+        Run r = run("trim", DEMO.toString(), "--keep", "margn");
+        assertThat(r.code()).isEqualTo(ExitCodes.USAGE);
+        assertThat(r.err()).contains("'margn' is not a keep rule; use margin or spec").doesNotContain("MARGIN");
+        assertThat(run("trim", "--help").out()).contains("--keep=RULE").contains("margin").contains("spec");
+    }
+
+    @Test
+    void monteCarloHelpSaysSamplesOfTheBankJudged() {
+        String help = run("check", "--help").out();
+        assertThat(help).contains("Monte Carlo samples").doesNotContain("After the bank is chosen")
+                .doesNotContain("variants");
+    }
+
+    @Test
     void missingScenarioFileIsAnIoError() {
         Run r = run("check", "no/such/scenario.toml", "--bank", DEMO_BANK.toString());
         assertThat(r.code()).isEqualTo(ExitCodes.IO_ERROR);
@@ -135,8 +174,8 @@ class CliTest {
         JsonNode s = new ObjectMapper().readTree(out.resolve("summary.json").toFile());
         for (String key : new String[] {"rail.target_impedance_ohm", "rail.current_step_a", "worst_case.droop_v",
             "worst_case.overshoot_v", "worst_case.min_voltage_v", "worst_case.max_voltage_v", "worst_case.passes",
-            "impedance.peak_ohm", "impedance.peak_hz", "impedance.ripple_db", "cost_total", "total_parts",
-            "distinct_parts", "rogue_factor"}) {
+            "impedance.peak_ohm", "impedance.peak_hz", "impedance.flatness_db", "cost_total", "total_parts",
+            "distinct_parts", "worst_case_ratio"}) {
             JsonNode n = s;
             for (String part : key.split("\\.")) {
                 n = n.path(part);

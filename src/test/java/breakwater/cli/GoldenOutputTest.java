@@ -45,7 +45,7 @@ class GoldenOutputTest {
             Pattern.compile("(<tr><td>search time</td><td>)[^<]*"),
             Pattern.compile("(Search +[0-9]+ banks evaluated in )[0-9.]+ s"),
             Pattern.compile("(Spread +[0-9]+ samples, .*, in )[0-9.]+ s"),
-            Pattern.compile("(were drawn \\(seed [0-9]+, )[0-9.]+ s"));
+            Pattern.compile("(samples were judged \\(seed [0-9]+, )[0-9.]+ s"));
 
     record Case(String name, List<String> args) {
         @Override

@@ -137,7 +137,7 @@ class VerdictTest {
 
     @Test
     void theSolversJudgementGoesThroughTheSameRule() {
-        // Judgement(droop, overshoot, droopExcess, overshootExcess, boardExcess, targetExcess, cost, ripple, peak/Zt, parts)
+        // Judgement(droop, overshoot, droopExcess, overshootExcess, boardExcess, targetExcess, cost, flatness, peak/Zt, parts)
         assertThat(new Judgement(0.03, 0.02, 0, 0, 0, 0, 1, 6, 0.8, 10).feasible())
                 .isEqualTo(Verdict.meetsSpec(0, 0, 0, false)).isTrue();
         assertThat(new Judgement(0.03, 0.02, 1e-6, 0, 0, 0, 1, 6, 0.8, 10).feasible()).isFalse();

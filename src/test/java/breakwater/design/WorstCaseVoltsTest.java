@@ -15,7 +15,7 @@ import static org.assertj.core.api.Assertions.within;
 class WorstCaseVoltsTest {
 
     @Test
-    void flatImpedanceAtTheTargetGivesARogueFactorOfOne() throws Exception {
+    void flatImpedanceAtTheTargetGivesAWorstCaseRatioOfOne() throws Exception {
         // Common practice: an impedance flat at the target keeps the excursion at ΔI·Z_t. Built as the
         // constant-resistance network (handbook): regulator Z_t + sL in parallel with a plane Z_t + 1/(sC)
         // with L/C = Z_t², which is exactly Z_t at every frequency.
@@ -27,7 +27,7 @@ class WorstCaseVoltsTest {
         Evaluation e = new BankEvaluator(scenario, Optional.empty()).evaluate(CapacitorBank.EMPTY);
         WorstCaseVolts f = e.figures();
         assertThat(f.droopV()).isCloseTo(rail.currentStepA() * zt, within(1e-9));
-        assertThat(f.rogueFactor()).isCloseTo(1.0, within(1e-9));
+        assertThat(f.worstCaseRatio()).isCloseTo(1.0, within(1e-9));
         // docs/worst-case.md#notation: V_min = V_nom − Z(0)·I_min − droop, with Z(0) = R_reg here
         assertThat(f.minVoltageV()).isCloseTo(1.0 - zt * rail.minCurrentA() - f.droopV(), within(1e-12));
         // P − N = Z(0) (worst-case mathematics): droop − overshoot = ΔI·Z(0)

@@ -66,26 +66,26 @@ class ImpedanceAnalysisTest {
     }
 
     @Test
-    void flatNetworkHasZeroRippleAndNoAntiResonance() {
-        // Constant-resistance network (handbook): |Z| = R everywhere, so ripple 0 dB, no local maximum.
+    void flatNetworkHasZeroFlatnessAndNoAntiResonance() {
+        // Constant-resistance network (handbook): |Z| = R everywhere, so flatness 0 dB, no local maximum.
         double r = 2e-3;
         double l = 20e-9;
         PowerNetwork net = new PowerNetwork(r, l, List.of(new SeriesBranch("c", r, 0, l / (r * r))), false, 0, 0, List.of());
         Band band = new Band(1e4, 1e8);
         ImpedanceMetrics m = ImpedanceAnalysis.analyze(net, ImpedanceCurve.sweep(net, FrequencyGrid.aroundBand(band, 200)),
                 band, r);
-        assertThat(m.rippleDb()).isCloseTo(0, within(1e-6));
+        assertThat(m.flatnessDb()).isCloseTo(0, within(1e-6));
         assertThat(m.peakOverTarget()).isCloseTo(1, within(1e-9));
         assertThat(m.antiResonances()).isEmpty();
     }
 
     @Test
-    void rippleIsTwentyLogOfPeakOverMin() {
+    void flatnessIsTwentyLogOfPeakOverMin() {
         PowerNetwork net = tank(10e-9, 1e-6, 5e-3);
         Band band = new Band(1e5, 1e8);
         ImpedanceMetrics m = ImpedanceAnalysis.analyze(net, ImpedanceCurve.sweep(net, FrequencyGrid.aroundBand(band, 200)),
                 band, 1.0);
-        assertThat(m.rippleDb()).isCloseTo(20 * Math.log10(m.peakOhms() / m.minOhms()), within(1e-12));
+        assertThat(m.flatnessDb()).isCloseTo(20 * Math.log10(m.peakOhms() / m.minOhms()), within(1e-12));
         assertThat(m.minOhms()).isLessThanOrEqualTo(net.magnitude(band.fromHz()));
         assertThat(m.minOhms()).isLessThanOrEqualTo(net.magnitude(band.toHz()));
     }

@@ -177,8 +177,8 @@ public final class ExampleReport {
                         "worst overshoot 22.1 mV stays inside the 28.5 mV allowed")),
                 List.of(new KeyFigure("worst droop", "24.6 mV"), new KeyFigure("worst overshoot", "22.1 mV"),
                         new KeyFigure("min voltage", "0.9254 V"), new KeyFigure("max voltage", "0.9721 V"),
-                        new KeyFigure("margin", "3.9 mV", Tone.GOOD), new KeyFigure("rogue factor", "2.59"),
-                        new KeyFigure("peak |Z|", "8.3 mΩ at 62 MHz"), new KeyFigure("ripple", "4.8 dB"),
+                        new KeyFigure("margin", "3.9 mV", Tone.GOOD), new KeyFigure("worst-case ratio", "2.59"),
+                        new KeyFigure("peak |Z|", "8.3 mΩ at 62 MHz"), new KeyFigure("flatness", "4.8 dB"),
                         new KeyFigure("cost", "1.49 USD"), new KeyFigure("parts", "36 (4 distinct)")),
                 z, wp, bom, resonances, sections, settings, List.of(ReportModel.STANDARD_CAUTION,
                         "Values in this example are invented."));
