@@ -68,6 +68,7 @@ public final class ConsoleReport {
                 + format(wc.marginV(), VOLTAGE) + (wc.passes() ? "  PASS" : "  FAIL"));
         line(b, "", String.format(Locale.ROOT, "worst-case ratio %.2f: worst excursion / ΔI·Z_t (ΔI·Z_t = %s)",
                 wc.worstCaseRatio(), format(r.currentStepA() * r.targetImpedanceOhms(), VOLTAGE)));
+        line(b, "", accuracy(e.worstCase().relativeAccuracy()));
         b.append('\n');
         var m = e.impedance();
         line(b, "Impedance", "peak " + format(m.peakOhms(), RESISTANCE) + " at " + format(m.peakHz(), FREQUENCY)
@@ -99,6 +100,12 @@ public final class ConsoleReport {
                     + "the sine response reaches 95 % of its steady state; - where no mode rings)\n");
         }
         return b.toString();
+    }
+
+    /** The worst case's stated accuracy in words (console and report). */
+    static String accuracy(double relative) {
+        return "exact for the model to " + String.format(Locale.ROOT, "%.0e", relative).replace("e-0", "e-")
+                + " relative: reached by a load pattern, at most that fraction below the model's true worst case";
     }
 
     /** Volts with 4 significant digits, always in V (engineers write 0.9 V, not 900 mV, for a rail). */

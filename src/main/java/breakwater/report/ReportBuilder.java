@@ -134,7 +134,8 @@ public final class ReportBuilder {
                 "The worst droop is the largest sag below the I_min operating point that ANY load current between "
                         + format(r.minCurrentA(), CURRENT) + " and " + format(r.maxCurrentA(), CURRENT)
                         + (r.hasEdgeTime() ? " slewing no faster than ΔI in " + format(r.edgeTimeS(), TIME) : "")
-                        + " can cause in this model; no pattern can do worse, and the pattern drawn above reaches it. "
+                        + " can cause in this model; no pattern can do worse, and the pattern drawn above reaches it ("
+                        + ConsoleReport.accuracy(e.worstCase().relativeAccuracy()) + "). "
                         + "The target impedance promises an excursion of ΔI·Z_t = "
                         + format(r.currentStepA() * r.targetImpedanceOhms(), VOLTAGE)
                         + "; a load that switches at the rhythm of the anti-resonances piles their ringing up, which is "

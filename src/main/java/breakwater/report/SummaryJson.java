@@ -71,6 +71,7 @@ public final class SummaryJson {
         w.put("edge_time_s", r.edgeTimeS());
         w.put("droop_ohm", e.worstCase().droopOhms());
         w.put("overshoot_ohm", e.worstCase().overshootOhms());
+        w.put("relative_accuracy", e.worstCase().relativeAccuracy());
         root.put("worst_case_ratio", wc.worstCaseRatio());
 
         var m = e.impedance();

@@ -18,6 +18,11 @@ public record WorstCase(double droopOhms, double overshootOhms, LoadPattern droo
         java.util.Objects.requireNonNull(overshootPattern, "overshootPattern");
     }
 
+    /** See {@link WorstCasePerAmpere#relativeAccuracy()}. */
+    public double relativeAccuracy() {
+        return WorstCaseAnalyzer.relativeAccuracy(edgeTimeS);
+    }
+
     /** Bound on the peak-to-peak excursion per ampere: droop + overshoot. */
     public double peakToPeakOhms() {
         return droopOhms + overshootOhms;

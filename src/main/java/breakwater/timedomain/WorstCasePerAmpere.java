@@ -22,6 +22,14 @@ public record WorstCasePerAmpere(double droopOhms, double overshootOhms, double 
         }
     }
 
+    /**
+     * How far below the model's true worst case these figures may be, relative
+     * ({@link WorstCaseAnalyzer#relativeAccuracy}): they are reached by a pattern, so they are never above it.
+     */
+    public double relativeAccuracy() {
+        return WorstCaseAnalyzer.relativeAccuracy(edgeTimeS);
+    }
+
     /** Bound on the peak-to-peak excursion per ampere: droop + overshoot. */
     public double peakToPeakOhms() {
         return droopOhms + overshootOhms;
