@@ -31,26 +31,118 @@ import java.nio.charset.StandardCharsets;
             "2:bad command line",
             "3:invalid input file (every problem is listed as file:line:column)",
             "4:I/O error reading or writing a file",
-            "70:internal error (a bug: please report it with the stack trace)"})
+            "70:internal error (a bug: please report it; --debug or BREAKWATER_DEBUG=1 shows the trace)"})
 public final class Main implements Runnable {
+
+    /** The environment variable that, set to 1 (or true), prints the trace of an internal error. */
+    static final String DEBUG_ENV = "BREAKWATER_DEBUG";
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
+
+    @CommandLine.Option(names = "--debug", scope = CommandLine.ScopeType.INHERIT,
+            description = "On an internal error (exit 70), print the Java stack trace as well (or set "
+                    + DEBUG_ENV + "=1).")
+    boolean debug;
 
     @Override
     public void run() {
         throw new CommandLine.ParameterException(spec.commandLine(), "a command is required (check, solve, ...)");
     }
 
+    /**
+     * Heap kept back for the last words: released before an internal error is reported, so that the
+     * report of an out-of-memory error has room to be written (common practice for a program's last line).
+     */
+    private static volatile byte[] reserve = new byte[256 * 1024];
+
     public static void main(String[] args) {
+        boolean debug = debugAsked(args, System.getenv(DEBUG_ENV));
+        // a throwable on a thread of our own (progress, a solver) ends the run like one on the main thread;
+        // the writer is made now, while there is memory for it
+        PrintWriter lastWords = new PrintWriter(System.err, true, StandardCharsets.UTF_8);
+        Thread.setDefaultUncaughtExceptionHandler((thread, ex) -> {
+            internalError(ex, lastWords, debug);
+            Runtime.getRuntime().halt(ExitCodes.INTERNAL);
+        });
         System.exit(run(args, System.out, System.err));
     }
 
     /** Runs the command line in-process; returns the exit code. Used by tests too. */
     public static int run(String[] args, PrintStream out, PrintStream err) {
+        return run(args, out, err, System.getenv(DEBUG_ENV));
+    }
+
+    /**
+     * As {@link #run(String[], PrintStream, PrintStream)}, with the value of {@value #DEBUG_ENV} given
+     * ({@code null} when unset). No throwable leaves: whatever escapes the command, out-of-memory and
+     * stack overflow included, is exit 70 with one line asking for a report.
+     */
+    static int run(String[] args, PrintStream out, PrintStream err, String debugEnv) {
+        boolean debug = debugAsked(args, debugEnv);
+        PrintWriter errWriter = new PrintWriter(err, true, StandardCharsets.UTF_8);
+        try {
+            return execute(args, out, errWriter, debug);
+        } catch (Throwable ex) { // an Error escapes picocli's handlers: still ours, still one line
+            return internalError(ex, errWriter, debug);
+        }
+    }
+
+    /** {@code --debug} among the options (before a {@code --} that ends them), or the variable set. */
+    static boolean debugAsked(String[] args, String debugEnv) {
+        if (debugEnv != null && (debugEnv.strip().equals("1") || debugEnv.strip().equalsIgnoreCase("true"))) {
+            return true;
+        }
+        for (String a : args) {
+            if (a.equals("--")) {
+                return false;
+            }
+            if (a.equals("--debug")) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * The one line of an internal error (and the trace when asked for); returns exit code 70. Running
+     * out of memory gets its own words, since more heap may be the way round it.
+     */
+    static int internalError(Throwable ex, PrintWriter e, boolean debug) {
+        reserve = null;
+        try {
+            if (ex instanceof OutOfMemoryError) {
+                e.println("breakwater: internal error: the Java heap ran out of memory (" + ex.getMessage()
+                        + "); please report it with the command you ran; more heap may get round it "
+                        + "(BREAKWATER_JAVA_OPTS=-Xmx4g)" + (debug ? "" : "; --debug or " + DEBUG_ENV
+                        + "=1 shows the trace") + ".");
+            } else {
+                String what = ex.getClass().getSimpleName() + (ex.getMessage() == null ? "" : ": "
+                        + firstLine(ex.getMessage()));
+                e.println("breakwater: internal error (a bug in breakwater, not in your input): " + what
+                        + "; please report it with the command you ran" + (debug ? " and the trace below"
+                        : "; --debug or " + DEBUG_ENV + "=1 shows the trace") + ".");
+            }
+            if (debug) {
+                ex.printStackTrace(e);
+            }
+            e.flush();
+        } catch (Throwable again) {
+            // nothing more can be said; the exit code still tells
+        }
+        return ExitCodes.INTERNAL;
+    }
+
+    private static String firstLine(String s) {
+        int nl = s.indexOf('\n');
+        String line = nl < 0 ? s : s.substring(0, nl);
+        return line.length() > 200 ? line.substring(0, 200) + " ..." : line;
+    }
+
+    private static int execute(String[] args, PrintStream out, PrintWriter errWriter, boolean debug) {
         CommandLine cl = new CommandLine(new Main());
         cl.setOut(new PrintWriter(out, true, StandardCharsets.UTF_8));
-        cl.setErr(new PrintWriter(err, true, StandardCharsets.UTF_8));
+        cl.setErr(errWriter);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setUsageHelpWidth(110); // descriptions are written for this width; no re-wrapping
         // compare takes --footprints (plural); the shared --footprint stays parsable, for its helpful
@@ -89,8 +181,7 @@ public final class Main implements Runnable {
             } else if (code == ExitCodes.USAGE) {
                 e.println("breakwater: " + ex.getMessage());
             } else {
-                e.println("breakwater: internal error — this is a bug; please report it with the trace below.");
-                ex.printStackTrace(e);
+                return internalError(ex, e, debug);
             }
             e.flush();
             return code;
