@@ -115,14 +115,14 @@ class ExcursionFrontierTest {
         // the catalog while the search for the third returns the plain run's bank of the second limit.
         // That bank keeps within the second limit, so the second point must show it, not the dear one.
         BankEvaluator spec = new BankEvaluator(BankSearchTest.scenario(0.05), Optional.empty());
-        ExcursionFrontier.Result plain = ExcursionFrontier.run(spec, BankSearchTest.PARTS, BankSearchTest.MAX, EACH, 4,
+        ExcursionFrontier.Result plain = ExcursionFrontier.run(spec, breakwater.design.Candidates.of(BankSearchTest.PARTS), BankSearchTest.MAX, EACH, 4,
                 (search, j, s, start) -> search.run(s, start), () -> false);
         CapacitorBank second = plain.points().get(1).bank();
         CandidateJudge judge = new CandidateJudge(spec, BankSearchTest.PARTS);
         int[] all = BankSearchTest.MAX.clone();
         CapacitorBank dearest = CapacitorBank.of(BankSearchTest.PARTS, all);
         int[] step = {0};
-        ExcursionFrontier.Result f = ExcursionFrontier.run(spec, BankSearchTest.PARTS, BankSearchTest.MAX, EACH, 4,
+        ExcursionFrontier.Result f = ExcursionFrontier.run(spec, breakwater.design.Candidates.of(BankSearchTest.PARTS), BankSearchTest.MAX, EACH, 4,
                 (search, j, s, start) -> {
                     int k = step[0]++;
                     if (k == 2) {
