@@ -159,6 +159,7 @@ public final class ReportBuilder {
                 .withChart(WorstCaseChart.svg(new WaveformPlot(
                         List.of(waveformSeries("worst-case overshoot pattern", run.overshoot())),
                         r.voltageV(), r.lowerLimitV(), r.upperLimitV()))));
+        placement(s, e).ifPresent(sections::add);
         sections.addAll(run.extraSections());
 
         List<List<String>> settings = new ArrayList<>();
@@ -185,6 +186,70 @@ public final class ReportBuilder {
                         + "datasheets, not the catalog's typical values.");
         return new ReportModel("Breakwater — " + (r.name().isEmpty() ? s.source() : r.name()), subtitle, verdict, keys,
                 imp, wave, bom, resonances, sections, settingsTable, cautions);
+    }
+
+    /**
+     * The placement section of a scenario with regions: the regions as boxes (path, parts, room used) and,
+     * per anti-resonance, |Z| with each region's parts removed.
+     */
+    static Optional<ReportModel.Section> placement(breakwater.scenario.Scenario s, Evaluation e) {
+        if (s.regions().isEmpty()) {
+            return Optional.empty();
+        }
+        List<breakwater.report.chart.PlacementChart.Box> boxes = new ArrayList<>();
+        for (breakwater.scenario.Region region : s.regions()) {
+            List<BankEntry> here = e.bank().inRegion(region.name());
+            int placed = here.stream().mapToInt(BankEntry::count).sum();
+            double used = Double.NaN;
+            List<String> lines = new ArrayList<>();
+            for (BankEntry be : here) {
+                lines.add(be.count() + " × " + be.part().name());
+            }
+            for (var limit : region.room().maxPerCase().entrySet()) {
+                int n = here.stream().filter(b -> b.part().caseCode().equals(limit.getKey())).mapToInt(BankEntry::count).sum();
+                lines.add("case " + limit.getKey() + ": " + n + " of " + limit.getValue());
+                if (limit.getValue() > 0) {
+                    used = Double.isNaN(used) ? (double) n / limit.getValue() : Math.max(used, (double) n / limit.getValue());
+                }
+            }
+            if (region.room().maxParts() > 0) {
+                double share = (double) placed / region.room().maxParts();
+                used = Double.isNaN(used) ? share : Math.max(used, share);
+            }
+            String path = format(region.resistanceOhms(), RESISTANCE) + " + "
+                    + format(region.inductanceH(), breakwater.units.Quantity.INDUCTANCE);
+            String room = region.room().maxParts() >= 0 ? placed + " parts of " + region.room().maxParts()
+                    : placed + " parts (no limit)";
+            boxes.add(new breakwater.report.chart.PlacementChart.Box(region.name(), path, room, used, lines));
+        }
+        String svg = breakwater.report.chart.PlacementChart.svg(
+                s.packagePath().present() ? "board node (package to the load)" : "board node (the load)", boxes);
+        List<List<String>> rows = new ArrayList<>();
+        var effects = breakwater.design.RegionEffect.of(e);
+        List<String> names = e.network().regions().stream().filter(r -> !r.branches().isEmpty())
+                .map(breakwater.network.RegionPath::name).toList();
+        for (int i = 0; i < effects.size(); i++) {
+            AntiResonance a = e.impedance().antiResonances().get(i);
+            List<String> row = new ArrayList<>();
+            row.add(format(a.frequencyHz(), FREQUENCY));
+            row.add(format(a.impedanceOhms(), RESISTANCE));
+            for (var x : effects.get(i)) {
+                row.add(format(x.withoutOhms(), RESISTANCE) + String.format(Locale.ROOT, " (× %.2f)", x.rise()));
+            }
+            rows.add(row);
+        }
+        List<String> headers = new ArrayList<>(List.of("anti-resonance", "|Z| as placed"));
+        for (String n : names) {
+            headers.add("without " + n);
+        }
+        List<ReportModel.Table> tables = rows.isEmpty() ? List.of()
+                : List.of(new ReportModel.Table("|Z| at each anti-resonance with one region's parts removed",
+                        headers, rows));
+        return Optional.of(new ReportModel.Section("Placement", List.of("Each region reaches the board node through its"
+                + " own spreading path (resistance + inductance), in series with every part placed there. The bar shows"
+                + " the share of the region's room in use (its tightest limit).",
+                "How much each region's parts hold down each peak: |Z| at that frequency if the region's parts were"
+                + " removed, and how many times the peak as placed that is."), tables, List.of(svg)));
     }
 
     /**

@@ -84,6 +84,7 @@ public final class SummaryJson {
         imp.put("flatness_db", m.flatnessDb());
         imp.put("dc_resistance_ohm", e.network().dcResistanceOhms());
         ArrayNode ar = root.putArray("anti_resonances");
+        var effects = breakwater.design.RegionEffect.of(e);
         for (int i = 0; i < m.antiResonances().size(); i++) {
             AntiResonance a = m.antiResonances().get(i);
             var rf = e.resonances().get(i);
@@ -99,6 +100,13 @@ public final class SummaryJson {
             putNumber(o, "sine_response_v", dI * rr.sineAmplitudeOhms());
             putNumber(o, "square_response_v", dI * rr.squareAmplitudeOhms());
             o.put("cycles_to_95_percent", rr.cyclesTo95Percent());
+            if (!effects.get(i).isEmpty()) {
+                // |Z| at this peak's frequency with one region's parts removed, per region
+                ObjectNode without = o.putObject("impedance_without_region_ohm");
+                for (var x : effects.get(i)) {
+                    without.put(x.region(), x.withoutOhms());
+                }
+            }
         }
         ArrayNode bank = root.putArray("bank");
         for (BankEntry be : e.bank().entries()) {

@@ -90,6 +90,13 @@ class PlacedBankCliTest {
         assertThat(s.path("distinct_parts").asInt()).isEqualTo(5);
         String bom = Files.readString(out.resolve("bom.csv"));
         assertThat(bom.lines().findFirst().orElseThrow()).endsWith(",region");
+        // per anti-resonance, |Z| with each region's parts removed; the report's placement view
+        JsonNode without = s.path("anti_resonances").get(0).path("impedance_without_region_ohm");
+        assertThat(without.size()).isEqualTo(3);
+        assertThat(without.path("bulk").asDouble()).isPositive();
+        String report = Files.readString(out.resolve("report.html"));
+        assertThat(report).contains("<h2>Placement</h2>").contains("32 parts of 40").contains("case 0201: 24 of 30")
+                .contains("without under-package");
         Run again = run("check", dir.resolve("placed.toml").toString(), "--bank", out.resolve("bom.csv").toString(),
                 "--json");
         JsonNode second = new ObjectMapper().readTree(again.out());
