@@ -60,6 +60,8 @@ final class ChartStyle {
      * the first installed of a metric-compatible group (Liberation Sans has Arial's metrics, Arial and
      * Helvetica are near-identical), else DejaVu Sans, else the logical sans-serif font.
      */
+    /** System property naming the chart font family to use when it is installed (else the usual choice). */
+    static final String FONT_PROPERTY = "breakwater.chart.font";
     private static final String FAMILY = chooseFamily();
     /** The font-family list written into the SVG for {@link #FAMILY}. */
     static final String CSS_FAMILY = switch (FAMILY) {
@@ -93,6 +95,11 @@ final class ChartStyle {
                     .getAvailableFontFamilyNames(Locale.ROOT));
         } catch (RuntimeException | Error e) { // no font configuration at all: fall back to the logical font
             return Font.SANS_SERIF;
+        }
+        // a family asked for by name (the tests pin one, so chart digests do not depend on what else is installed)
+        String asked = System.getProperty(FONT_PROPERTY, "");
+        if (!asked.isEmpty() && installed.contains(asked)) {
+            return asked;
         }
         for (String f : List.of("Liberation Sans", "Arial", "Helvetica", "DejaVu Sans")) {
             if (installed.contains(f)) {
