@@ -33,8 +33,15 @@ public final class CostDown {
         SPEC
     }
 
-    /** A change of one part's count; 0 for a part not placed. */
-    public record Change(String part, int from, int to) {
+    /**
+     * A change of one part's count in one placement region ("" without regions); 0 for a part not placed
+     * there. {@code moved}: some of the part's parts went to, or came from, another region (its count over
+     * all regions changed less than here).
+     */
+    public record Change(String part, String region, int from, int to, boolean moved) {
+        public Change(String part, int from, int to) {
+            this(part, "", from, to, false);
+        }
     }
 
     /**
@@ -105,19 +112,28 @@ public final class CostDown {
         return Verdict.meetsSpec(e, judge.scenario().requireTarget());
     }
 
-    /** Per part, old count to new count, for every part whose count differs (existing order, then new parts). */
+    /**
+     * Per part and region, old count to new count, for every one whose count differs (existing order, then
+     * new ones); a part whose parts moved between regions is marked on each of its changes.
+     */
     public static List<Change> changes(CapacitorBank from, CapacitorBank to) {
-        Set<String> names = new LinkedHashSet<>();
+        Set<List<String>> keys = new LinkedHashSet<>();
         for (BankEntry e : from.entries()) {
-            names.add(e.part().name());
+            keys.add(List.of(e.part().name(), e.region()));
         }
         for (BankEntry e : to.entries()) {
-            names.add(e.part().name());
+            keys.add(List.of(e.part().name(), e.region()));
         }
         List<Change> out = new ArrayList<>();
-        for (String n : names) {
-            if (from.count(n) != to.count(n)) {
-                out.add(new Change(n, from.count(n), to.count(n)));
+        for (List<String> k : keys) {
+            String n = k.get(0);
+            String r = k.get(1);
+            int a = from.count(n, r);
+            int b = to.count(n, r);
+            if (a != b) {
+                // moved: this region's change is not all of the part's change over every region
+                boolean moved = !r.isEmpty() && Math.abs(to.count(n) - from.count(n)) < Math.abs(b - a);
+                out.add(new Change(n, r, a, b, moved));
             }
         }
         return out;

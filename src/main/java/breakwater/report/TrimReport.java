@@ -60,8 +60,9 @@ public final class TrimReport {
             c.append(String.format(Locale.ROOT, "%-10s %d part count%s changed (keeping %s):%n", "Trim",
                     r.changes().size(), Texts.plural(r.changes().size()), keeping(r, "the existing margin")));
             for (CostDown.Change ch : r.changes()) {
-                c.append(String.format(Locale.ROOT, "  %-24s %4d -> %-4d %s%n", ch.part(), ch.from(), ch.to(),
-                        ch.to() == 0 ? "(removed)" : ch.from() == 0 ? "(added)" : ""));
+                c.append(String.format(Locale.ROOT, "  %-24s %4d -> %-4d %s%s%n", ch.part(), ch.from(), ch.to(),
+                        ch.to() == 0 ? "(removed)" : ch.from() == 0 ? "(added)" : "",
+                        (ch.region().isEmpty() ? "" : " in " + ch.region()) + (ch.moved() ? ", moved between regions" : "")));
             }
         }
         c.append(String.format(Locale.ROOT, "%-10s %s%s per board, %s%s per 1,000 boards (%s -> %s%s)%n", "Savings",
@@ -84,8 +85,10 @@ public final class TrimReport {
         double savings = r.savings();
         List<List<String>> changeRows = new ArrayList<>();
         for (CostDown.Change ch : r.changes()) {
-            changeRows.add(List.of(ch.part(), Integer.toString(ch.from()), Integer.toString(ch.to()),
-                    ch.to() == 0 ? "removed" : ch.from() == 0 ? "added" : ch.to() < ch.from() ? "fewer" : "more"));
+            changeRows.add(List.of(ch.part() + (ch.region().isEmpty() ? "" : " in " + ch.region()),
+                    Integer.toString(ch.from()), Integer.toString(ch.to()),
+                    (ch.to() == 0 ? "removed" : ch.from() == 0 ? "added" : ch.to() < ch.from() ? "fewer" : "more")
+                            + (ch.moved() ? ", moved between regions" : "")));
         }
         List<List<String>> cmp = List.of(
                 List.of("cost per board", money(old.cost().total()) + cur, money(e.cost().total()) + cur),
@@ -147,6 +150,10 @@ public final class TrimReport {
         for (CostDown.Change ch : r.changes()) {
             ObjectNode o = arr.addObject();
             o.put("part", ch.part());
+            if (!ch.region().isEmpty()) {
+                o.put("region", ch.region());
+                o.put("moved_between_regions", ch.moved());
+            }
             o.put("from", ch.from());
             o.put("to", ch.to());
         }

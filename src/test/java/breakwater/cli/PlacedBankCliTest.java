@@ -192,4 +192,20 @@ class PlacedBankCliTest {
         assertThat(c.path("worst_case").path("droop_v").asDouble())
                 .isEqualTo(s.path("worst_case").path("droop_v").asDouble());
     }
+
+    /** trim starts from a placed bank and lists its changes per part and region. */
+    @Test
+    void trimListsItsChangesPerPartAndRegion(@TempDir Path dir) throws IOException {
+        Path sc = scenario(dir, "8 pH", "40 pH", "250 pH");
+        Files.writeString(sc, Files.readString(sc).replace("tolerance = \"3 %\"", "tolerance = \"3.5 %\""));
+        Run r = run("trim", sc.toString(), "--bank", bank(dir, PLACED_BANK).toString(), "--keep", "spec", "--seed", "1",
+                "--moves", "600", "--solvers", "1", "--json");
+        assertThat(r.code()).as(r.err()).isIn(ExitCodes.OK, ExitCodes.SPEC_NOT_MET);
+        JsonNode s = new ObjectMapper().readTree(r.out());
+        assertThat(s.path("trim").path("changes").size()).isPositive();
+        for (JsonNode c : s.path("trim").path("changes")) {
+            assertThat(c.path("region").asText()).isIn("under-package", "ring", "bulk");
+            assertThat(c.has("moved_between_regions")).isTrue();
+        }
+    }
 }
