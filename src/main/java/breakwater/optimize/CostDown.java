@@ -32,6 +32,15 @@ public final class CostDown {
         SPEC
     }
 
+    /**
+     * The rule a trim applies: the one asked for, except that an existing bank whose worst case misses the
+     * spec has no margin to keep, so {@link Keep#MARGIN} becomes {@link Keep#SPEC} for it (the cheaper bank
+     * must meet the spec). Every output states this one rule.
+     */
+    public static Keep applied(Keep asked, Evaluation existing) {
+        return asked == Keep.MARGIN && !existing.figures().passes() ? Keep.SPEC : asked;
+    }
+
     /** A change of one part's count; 0 for a part not placed. */
     public record Change(String part, int from, int to) {
     }
