@@ -69,6 +69,26 @@ public final class CostDown {
         };
     }
 
+    /**
+     * The parts a trim may use: every candidate, or with {@code existingPartsOnly} only the part numbers
+     * already on the existing bank (a qualified BOM takes no new part number without requalification).
+     */
+    public static List<Part> candidates(List<Part> candidates, CapacitorBank existing, boolean existingPartsOnly) {
+        if (!existingPartsOnly) {
+            return candidates;
+        }
+        return candidates.stream().filter(p -> existing.count(p.name()) > 0).toList();
+    }
+
+    /**
+     * The search's largest counts: with {@code existingPartsOnly} each part's count on the existing bank
+     * (a trim then only removes parts or lowers counts), otherwise {@link #maxCounts(List, Scenario, CapacitorBank)}.
+     */
+    public static int[] maxCounts(List<Part> candidates, Scenario scenario, CapacitorBank existing,
+                                  boolean existingPartsOnly) {
+        return existingPartsOnly ? existing.countsFor(candidates) : maxCounts(candidates, scenario, existing);
+    }
+
     /** The search's largest counts, raised where needed so the existing bank itself can be represented. */
     public static int[] maxCounts(List<Part> candidates, Scenario scenario, CapacitorBank existing) {
         int[] max = MaxCounts.of(candidates, scenario);

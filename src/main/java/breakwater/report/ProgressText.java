@@ -48,7 +48,8 @@ public final class ProgressText {
     }
 
     private static String keeping(SearchStage.Trimming t) {
-        return Texts.keepRule(t.keep(), t.existing().figures());
+        return Texts.keepRule(t.keep(), t.existing().figures())
+                + (t.existingPartsOnly() ? " and only the existing part numbers" : "");
     }
 
     /** The line announcing the Monte Carlo samples. */

@@ -40,7 +40,8 @@ public final class TrimReport {
 
     /** The rule applied, in the wording every output shares ({@link Texts#keepRule}). */
     private static String keeping(TrimResult r) {
-        return Texts.keepRule(r.keep(), r.existing().figures());
+        return Texts.keepRule(r.keep(), r.existing().figures())
+                + (r.existingPartsOnly() ? " and only the existing part numbers" : "");
     }
 
     static String console(TrimResult r) {
@@ -133,6 +134,7 @@ public final class TrimReport {
         ObjectNode t = json.putObject("trim");
         t.put("keep", r.keep().name().toLowerCase(Locale.ROOT));
         t.put("keep_asked", r.keepAsked().name().toLowerCase(Locale.ROOT));
+        t.put("existing_parts_only", r.existingPartsOnly());
         t.put("unchanged", r.unchanged());
         t.put("reason", r.reason());
         ObjectNode ex = t.putObject("existing");
