@@ -46,6 +46,11 @@ final class TrimCommand implements Callable<Integer> {
                     + "existing bank's) or spec (merely inside the tolerance). Default: ${DEFAULT-VALUE}.")
     CostDown.Keep keep;
 
+    @Option(names = "--no-new-parts",
+            description = "Only remove parts or lower the counts of part numbers already on the existing bank: "
+                    + "no new part number (a qualified BOM takes none without requalification).")
+    boolean noNewParts;
+
     @Mixin
     OutputOptions output;
 
@@ -82,7 +87,7 @@ final class TrimCommand implements Callable<Integer> {
         var settings = search.settings(in.scenario());
         var draws = monteCarlo.settings(in.scenario());
         try (Searches progress = new Searches(spec.commandLine().getErr(), output.silent(), true)) {
-            TrimResult r = TrimResult.trim(judge, output.footprint, Inputs.display(file), existing, keep,
+            TrimResult r = TrimResult.trim(judge, output.footprint, Inputs.display(file), existing, keep, noNewParts,
                     in.catalog().parts(), settings, draws, progress);
             TrimReport.write(r, target, spec.commandLine().getOut());
             return ExitCodes.of(r.verdict());

@@ -34,6 +34,15 @@ public final class CostDown {
     }
 
     /**
+     * The rule a trim applies: the one asked for, except that an existing bank whose worst case misses the
+     * spec has no margin to keep, so {@link Keep#MARGIN} becomes {@link Keep#SPEC} for it (the cheaper bank
+     * must meet the spec). Every output states this one rule.
+     */
+    public static Keep applied(Keep asked, Evaluation existing) {
+        return asked == Keep.MARGIN && !existing.figures().passes() ? Keep.SPEC : asked;
+    }
+
+    /**
      * A change of one part's count in one placement region ("" without regions); 0 for a part not placed
      * there. {@code moved}: some of the part's parts went to, or came from, another region (its count over
      * all regions changed less than here).
@@ -68,12 +77,47 @@ public final class CostDown {
         };
     }
 
-    /** The search's largest counts, raised where needed so the existing bank itself can be represented. */
+    /**
+     * The parts a trim may use: every candidate, or with {@code existingPartsOnly} only the part numbers
+     * already on the existing bank (a qualified BOM takes no new part number without requalification).
+     */
+    public static List<Part> candidates(List<Part> candidates, CapacitorBank existing, boolean existingPartsOnly) {
+        if (!existingPartsOnly) {
+            return candidates;
+        }
+        return candidates.stream().filter(p -> existing.count(p.name()) > 0).toList();
+    }
+
+    /** As {@link #candidates(List, CapacitorBank, boolean)} for candidates in placement regions. */
+    public static Candidates candidates(Candidates candidates, CapacitorBank existing, boolean existingPartsOnly) {
+        return existingPartsOnly ? candidates.filter(p -> existing.count(p.name()) > 0) : candidates;
+    }
+
+    /**
+     * The search's largest counts: with {@code existingPartsOnly} each part's count on the existing bank
+     * (a trim then only removes parts or lowers counts), otherwise {@link #maxCounts(List, Scenario, CapacitorBank)}.
+     */
+    public static int[] maxCounts(List<Part> candidates, Scenario scenario, CapacitorBank existing,
+                                  boolean existingPartsOnly) {
+        return maxCounts(Candidates.of(candidates), scenario, existing, existingPartsOnly);
+    }
+
+    /**
+     * As {@link #maxCounts(List, Scenario, CapacitorBank, boolean)} for candidates in placement regions: with
+     * {@code existingPartsOnly} each part's count in each region on the existing bank (so nothing moves
+     * into a region either).
+     */
+    public static int[] maxCounts(Candidates candidates, Scenario scenario, CapacitorBank existing,
+                                  boolean existingPartsOnly) {
+        return existingPartsOnly ? candidates.counts(existing) : maxCounts(candidates, scenario, existing);
+    }
+
     /** As {@link #maxCounts(Candidates, Scenario, CapacitorBank)} for the parts themselves, on the board node. */
     public static int[] maxCounts(List<Part> parts, Scenario scenario, CapacitorBank existing) {
         return maxCounts(Candidates.of(parts), scenario, existing);
     }
 
+    /** The search's largest counts, raised where needed so the existing bank itself can be represented. */
     public static int[] maxCounts(Candidates candidates, Scenario scenario, CapacitorBank existing) {
         int[] max = MaxCounts.of(candidates, scenario);
         int[] have = candidates.counts(existing);

@@ -12,8 +12,12 @@ public sealed interface SearchStage {
     record Solving(int parts, SearchSettings settings) implements SearchStage {
     }
 
-    /** {@code trim}: a search from the existing bank, named {@code bankName}, keeping {@code keep}. */
-    record Trimming(String bankName, Evaluation existing, CostDown.Keep keep, int parts, SearchSettings settings)
+    /**
+     * {@code trim}: a search from the existing bank, named {@code bankName}, keeping {@code keep} (and
+     * only its own part numbers when {@code existingPartsOnly}).
+     */
+    record Trimming(String bankName, Evaluation existing, CostDown.Keep keep, boolean existingPartsOnly, int parts,
+                    SearchSettings settings)
             implements SearchStage {
     }
 

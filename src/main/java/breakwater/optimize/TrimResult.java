@@ -21,7 +21,9 @@ import java.util.Optional;
  * @param judge         the rail's own judge
  * @param existing      the bank it started from, fully evaluated
  * @param trimmed       the bank returned (the search's, or the existing one), fully evaluated
- * @param keep          what the cheaper bank had to keep
+ * @param keep          the rule applied: what the cheaper bank had to keep ({@link CostDown#applied})
+ * @param keepAsked     the rule asked for (--keep)
+ * @param existingPartsOnly whether the trim could only remove parts or lower counts of the existing part numbers
  * @param keepRuleMet   whether the bank returned keeps it ({@link CostDown#keeps})
  * @param unchanged     whether the existing bank was returned
  * @param reason        why it was ("" when it was not)
@@ -31,7 +33,7 @@ import java.util.Optional;
  * @param verdict       the verdict of the run (a lost margin is its own condition)
  */
 public record TrimResult(String footprintName, BankEvaluator judge, Evaluation existing, Evaluation trimmed,
-                         CostDown.Keep keep, boolean keepRuleMet, boolean unchanged, String reason,
+                         CostDown.Keep keep, CostDown.Keep keepAsked, boolean existingPartsOnly, boolean keepRuleMet, boolean unchanged, String reason,
                          List<CostDown.Change> changes, SearchResult search, Optional<MonteCarlo.Result> monteCarlo,
                          Verdict verdict) {
     public TrimResult {
@@ -57,23 +59,28 @@ public record TrimResult(String footprintName, BankEvaluator judge, Evaluation e
      * when it is strictly cheaper and inside the judge's limits ({@link CostDown#decide}).
      *
      * @param bankName how the user knows the existing bank (its file), for the announcement
+     * @param existingPartsOnly only remove parts or lower counts of part numbers on the existing bank
      */
     public static TrimResult trim(BankEvaluator spec, String footprintName, String bankName, CapacitorBank existing,
-                                  CostDown.Keep keep, List<Part> parts, SearchSettings settings,
+                                  CostDown.Keep keep, boolean existingPartsOnly, List<Part> catalog,
+                                  SearchSettings settings,
                                   Optional<MonteCarlo.Settings> monteCarlo, SearchRunner runner) {
         Evaluation old = spec.evaluate(existing);
-        Candidates candidates = Candidates.forScenario(parts, spec.scenario());
-        BankEvaluator judge = CostDown.judge(spec, old, keep);
-        BankSearch search = new BankSearch(judge, candidates, CostDown.maxCounts(candidates, spec.scenario(), existing));
-        runner.announce(new SearchStage.Trimming(bankName, old, keep, candidates.size(), settings));
+        CostDown.Keep rule = CostDown.applied(keep, old);
+        BankEvaluator judge = CostDown.judge(spec, old, rule);
+        Candidates candidates = CostDown.candidates(Candidates.forScenario(catalog, spec.scenario()), existing,
+                existingPartsOnly);
+        BankSearch search = new BankSearch(judge, candidates,
+                CostDown.maxCounts(candidates, spec.scenario(), existing, existingPartsOnly));
+        runner.announce(new SearchStage.Trimming(bankName, old, rule, existingPartsOnly, candidates.size(), settings));
         SearchResult result = runner.run(search, judge, settings, existing);
         CostDown.Decision d = CostDown.decide(judge, existing, result.bank());
         Evaluation e = spec.evaluate(d.chosen());
-        boolean kept = CostDown.keeps(keep, old, e);
+        boolean kept = CostDown.keeps(rule, old, e);
         Optional<MonteCarlo.Result> mc = MonteCarlo.runRequested(spec, d.chosen(), monteCarlo, runner);
         Verdict verdict = Verdict.of(e, spec.scenario().requireTarget(),
                 kept ? List.of() : List.of(new Verdict.TrimLostMargin()), MonteCarlo.yieldOf(mc), false);
-        return new TrimResult(footprintName, spec, old, e, keep, kept, d.unchanged(), d.reason(),
+        return new TrimResult(footprintName, spec, old, e, rule, keep, existingPartsOnly, kept, d.unchanged(), d.reason(),
                 CostDown.changes(d.existing(), d.chosen()), result, mc, verdict);
     }
 }

@@ -3,7 +3,6 @@ package breakwater.report;
 import breakwater.design.BankEvaluator;
 import breakwater.design.Judgement;
 import breakwater.design.MonteCarlo;
-import breakwater.optimize.CostDown;
 import breakwater.optimize.SearchProgress;
 import breakwater.optimize.SearchSettings;
 import breakwater.optimize.SearchStage;
@@ -49,13 +48,8 @@ public final class ProgressText {
     }
 
     private static String keeping(SearchStage.Trimming t) {
-        var was = t.existing().figures();
-        if (t.keep() == CostDown.Keep.SPEC) {
-            return "the spec";
-        }
-        return was.passes() ? "its worst droop " + format(was.droopV(), VOLTAGE) + " and overshoot "
-                + format(was.overshootV(), VOLTAGE) + " or better"
-                : "the spec (the existing bank itself misses it, so it has no margin to keep)";
+        return Texts.keepRule(t.keep(), t.existing().figures())
+                + (t.existingPartsOnly() ? " and only the existing part numbers" : "");
     }
 
     /** The line announcing the Monte Carlo samples. */

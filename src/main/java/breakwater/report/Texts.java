@@ -1,7 +1,13 @@
 package breakwater.report;
 
+import breakwater.design.WorstCaseVolts;
+import breakwater.optimize.CostDown;
+
 import java.time.Duration;
 import java.util.Locale;
+
+import static breakwater.units.EngineeringNotation.format;
+import static breakwater.units.Quantity.VOLTAGE;
 
 /** Small text helpers shared by the reporters. */
 final class Texts {
@@ -25,6 +31,20 @@ final class Texts {
             return String.format(Locale.ROOT, "%.4g min", s / 60);
         }
         return String.format(Locale.ROOT, "%.4g s", s);
+    }
+
+    /**
+     * The keep rule a trim applied, in the one wording every output uses after "keeping ": stderr,
+     * the console, the report (and summary.json's {@code trim.keep} names it).
+     */
+    static String keepRule(CostDown.Keep rule, WorstCaseVolts existing) {
+        if (rule == CostDown.Keep.MARGIN) {
+            return "the existing bank's worst droop " + format(existing.droopV(), VOLTAGE) + " and worst overshoot "
+                    + format(existing.overshootV(), VOLTAGE)
+                    + " or better";
+        }
+        return existing.passes() ? "the spec"
+                : "the spec (the existing bank itself misses it, so it has no margin to keep)";
     }
 
     /** "" for one, "s" for any other count. */

@@ -38,8 +38,10 @@ public final class TrimReport {
         return new ModeOutput(console(r), json -> summary(json, r), List.of(section(r)), overlays(r));
     }
 
-    private static String keeping(TrimResult r, String margin) {
-        return r.keep() == CostDown.Keep.MARGIN ? margin : "the spec";
+    /** The rule applied, in the wording every output shares ({@link Texts#keepRule}). */
+    private static String keeping(TrimResult r) {
+        return Texts.keepRule(r.keep(), r.existing().figures())
+                + (r.existingPartsOnly() ? " and only the existing part numbers" : "");
     }
 
     static String console(TrimResult r) {
@@ -51,14 +53,15 @@ public final class TrimReport {
         double savings = r.savings();
         StringBuilder c = new StringBuilder();
         if (r.unchanged()) {
-            c.append(String.format(Locale.ROOT, "%-10s existing bank returned UNCHANGED: %s%n", "Trim", r.reason()));
+            c.append(String.format(Locale.ROOT, "%-10s existing bank returned UNCHANGED, keeping %s: %s%n", "Trim",
+                    keeping(r), r.reason()));
             if (!was.passes()) {
                 c.append(String.format(Locale.ROOT, "%-10s the existing bank does not meet the spec itself; "
                         + "'breakwater solve' searches for one that does%n", ""));
             }
         } else {
-            c.append(String.format(Locale.ROOT, "%-10s %d part count%s changed (keeping %s):%n", "Trim",
-                    r.changes().size(), Texts.plural(r.changes().size()), keeping(r, "the existing margin")));
+            c.append(String.format(Locale.ROOT, "%-10s %d part count%s changed, keeping %s:%n", "Trim",
+                    r.changes().size(), Texts.plural(r.changes().size()), keeping(r)));
             for (CostDown.Change ch : r.changes()) {
                 c.append(String.format(Locale.ROOT, "  %-24s %4d -> %-4d %s%s%n", ch.part(), ch.from(), ch.to(),
                         ch.to() == 0 ? "(removed)" : ch.from() == 0 ? "(added)" : "",
@@ -100,10 +103,10 @@ public final class TrimReport {
                 List.of("flatness (max/min |Z|)", String.format(Locale.ROOT, "%.2f dB", old.impedance().flatnessDb()),
                         String.format(Locale.ROOT, "%.2f dB", e.impedance().flatnessDb())));
         String intro = r.unchanged()
-                ? "The existing bank is returned unchanged: " + r.reason() + "."
+                ? "Keeping " + keeping(r) + ", the existing bank is returned unchanged: " + r.reason() + "."
                 : String.format(Locale.ROOT, "Keeping %s, the trimmed bank saves %s%s per board (%.2f%s per 1,000 "
                         + "boards). The charts above overlay the trimmed bank (first) and the existing one.",
-                keeping(r, "the existing bank's worst droop and overshoot"), money(savings), cur, 1000 * savings, cur);
+                keeping(r), money(savings), cur, 1000 * savings, cur);
         return new ReportModel.Section("Cost-down of the existing bank", List.of(intro),
                 List.of(new ReportModel.Table("Part counts changed", List.of("part", "existing", "trimmed", "change"),
                                 changeRows),
@@ -133,6 +136,8 @@ public final class TrimReport {
         Evaluation old = r.existing();
         ObjectNode t = json.putObject("trim");
         t.put("keep", r.keep().name().toLowerCase(Locale.ROOT));
+        t.put("keep_asked", r.keepAsked().name().toLowerCase(Locale.ROOT));
+        t.put("existing_parts_only", r.existingPartsOnly());
         t.put("unchanged", r.unchanged());
         t.put("reason", r.reason());
         ObjectNode ex = t.putObject("existing");

@@ -197,6 +197,59 @@ class ModesCliTest {
     }
 
     @Test
+    void trimWithNoNewPartsOnlyRemovesPartsOrLowersCounts(@TempDir Path dir) throws IOException {
+        // two part numbers on the qualified BOM; without the option the cheapest trim found adds a third
+        Path bank = dir.resolve("qualified.csv");
+        Files.writeString(bank, "part,count\nbulk-100u,5\nmid-10u,5\n");
+        JsonNode free = new ObjectMapper().readTree(run(args("trim", SMALL.toString(), "--bank", bank.toString(),
+                "--keep", "spec", "--json")).out());
+        assertThat(at(free, "trim.changes").findValuesAsText("part")).as("the free trim adds a part number")
+                .contains("small-1u");
+        CliTest.Run r = run(args("trim", SMALL.toString(), "--bank", bank.toString(), "--keep", "spec",
+                "--no-new-parts", "--json"));
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        JsonNode s = new ObjectMapper().readTree(r.out());
+        assertThat(at(s, "trim.existing_parts_only").asBoolean()).isTrue();
+        assertThat(at(s, "trim.unchanged").asBoolean()).isFalse();
+        for (JsonNode ch : at(s, "trim.changes")) {
+            assertThat(ch.path("part").asText()).isIn("bulk-100u", "mid-10u");
+            assertThat(ch.path("to").asInt()).isLessThan(ch.path("from").asInt());
+        }
+        for (JsonNode entry : at(s, "bank")) {
+            assertThat(entry.path("part").asText()).as("no new part number").isIn("bulk-100u", "mid-10u");
+        }
+        assertThat(at(s, "cost_total").asDouble()).isLessThan(at(s, "trim.existing.cost_total").asDouble());
+    }
+
+    @Test
+    void trimStatesTheOneRuleItAppliedInEveryOutput(@TempDir Path dir) throws IOException {
+        // the default --keep margin on a bank that misses the spec: there is no margin to keep, so the rule
+        // applied is the spec, and stderr, stdout, summary.json and the report all say that one rule
+        String rule = "keeping the spec (the existing bank itself misses it, so it has no margin to keep)";
+        Path bank = dir.resolve("one.csv");
+        Files.writeString(bank, "part,count\nhf-100n,1\n");
+        Path out = dir.resolve("t");
+        CliTest.Run r = run(args("trim", SMALL.toString(), "--bank", bank.toString(), "--out", out.toString()));
+        assertThat(r.err()).contains(rule).doesNotContain("keeping the existing");
+        assertThat(r.out()).contains(rule).doesNotContain("keeping the existing");
+        JsonNode s = json(out.resolve("summary.json"));
+        assertThat(at(s, "trim.keep").asText()).isEqualTo("spec");
+        assertThat(at(s, "trim.keep_asked").asText()).isEqualTo("margin");
+        String html = Files.readString(out.resolve("report.html"));
+        assertThat(html).contains("Keeping the spec (the existing bank itself misses it, so it has no margin to keep)")
+                .doesNotContain("keeping the existing bank&#39;s worst droop");
+        // and a bank that meets the spec keeps its own worst case, said the same way everywhere
+        Path out2 = dir.resolve("t2");
+        CliTest.Run kept = run(args("trim", SMALL.toString(), "--out", out2.toString()));
+        JsonNode s2 = json(out2.resolve("summary.json"));
+        assertThat(at(s2, "trim.keep").asText()).isEqualTo("margin");
+        String margin = "keeping the existing bank's worst droop";
+        assertThat(kept.err()).contains(margin);
+        assertThat(kept.out()).contains(margin);
+        assertThat(Files.readString(out2.resolve("report.html"))).contains("Keeping the existing bank&#39;s worst droop");
+    }
+
+    @Test
     void anOutThatIsAFileIsRefusedBeforeAnyWork(@TempDir Path dir) throws IOException {
         Path file = dir.resolve("notes.txt");
         Files.writeString(file, "my own notes");

@@ -212,12 +212,19 @@ final class ChartStyle {
 
     /** A labelled line at {@code value}, the label at the right end, above the line or {@code below} it. */
     static ValueMarker valueLine(double value, String label, Paint paint, Stroke stroke, boolean below) {
+        return valueLine(value, label, paint, stroke, below, false);
+    }
+
+    /** As {@link #valueLine(double, String, Paint, Stroke, boolean)}, the label at the left end when {@code left}. */
+    static ValueMarker valueLine(double value, String label, Paint paint, Stroke stroke, boolean below, boolean left) {
         ValueMarker m = new ValueMarker(value, paint, stroke);
         m.setLabel(label);
         m.setLabelFont(NOTE_FONT);
         m.setLabelPaint(paint);
-        m.setLabelAnchor(below ? RectangleAnchor.BOTTOM_RIGHT : RectangleAnchor.TOP_RIGHT);
-        m.setLabelTextAnchor(below ? TextAnchor.TOP_RIGHT : TextAnchor.BOTTOM_RIGHT);
+        m.setLabelAnchor(left ? (below ? RectangleAnchor.BOTTOM_LEFT : RectangleAnchor.TOP_LEFT)
+                : (below ? RectangleAnchor.BOTTOM_RIGHT : RectangleAnchor.TOP_RIGHT));
+        m.setLabelTextAnchor(left ? (below ? TextAnchor.TOP_LEFT : TextAnchor.BOTTOM_LEFT)
+                : (below ? TextAnchor.TOP_RIGHT : TextAnchor.BOTTOM_RIGHT));
         m.setLabelOffset(new RectangleInsets(2, 6, 2, 6));
         m.setLabelBackgroundColor(LABEL_BACKGROUND);
         return m;

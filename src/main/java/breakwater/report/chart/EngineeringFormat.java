@@ -57,6 +57,18 @@ public final class EngineeringFormat extends NumberFormat {
         return new EngineeringFormat(checkUnit(unit), exp3, decimalsFor((upper - lower) / Math.pow(10, 3 * exp3)), true);
     }
 
+    /**
+     * One SI prefix for an axis from {@code lower} to {@code upper} that puts the larger end in [1, 1000):
+     * "168.3 µs" and "20 µs" rather than "0.1683 ms". For time axes, whose titles and legends name
+     * instants and windows with their own prefix ("the last 112 ns"), so that one chart uses one unit.
+     */
+    public static EngineeringFormat forRangeInWholeUnits(String unit, double lower, double upper) {
+        checkRange(lower, upper);
+        double maxAbs = Math.max(Math.abs(lower), Math.abs(upper));
+        int exp3 = maxAbs == 0 ? 0 : clampExp3(Math.floorDiv((int) Math.floor(Math.log10(maxAbs) + 1e-9), 3));
+        return new EngineeringFormat(checkUnit(unit), exp3, decimalsFor((upper - lower) / Math.pow(10, 3 * exp3)), true);
+    }
+
     /** No prefix, decimals chosen for the span: {@code plain("USD", 0, 2)} gives "0.25 USD". */
     public static EngineeringFormat plain(String unit, double lower, double upper) {
         checkRange(lower, upper);

@@ -17,7 +17,11 @@ import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
+import org.jfree.chart.ChartRenderingInfo;
+
+import java.awt.Graphics2D;
 import java.awt.Shape;
+import java.awt.image.BufferedImage;
 import java.awt.geom.Path2D;
 import java.awt.geom.Rectangle2D;
 
@@ -119,19 +123,65 @@ public final class ImpedanceChart {
             xy.setDataset(1, new XYSeriesCollection(marks));
             xy.setRenderer(1, shapes);
             legend.add(new LegendItem("anti-resonance", null, null, null, triangle, MARK));
-            for (ImpedanceMarker m : plot.markers()) {
-                if (!m.label().isEmpty()) {
-                    // a tenth of a decade above the marker, in data units on the log axis
-                    XYTextAnnotation a = new XYTextAnnotation(m.label(), m.frequencyHz(), m.impedanceOhm() * 1.3);
-                    a.setFont(NOTE_FONT);
-                    a.setPaint(MARK);
-                    a.setTextAnchor(TextAnchor.BOTTOM_CENTER);
-                    lines.addAnnotation(a);
-                }
-            }
         }
         xy.setFixedLegendItems(legend);
-        return ChartStyle.chart(xy, true);
+        JFreeChart chart = ChartStyle.chart(xy, true);
+        if (plot.markers().stream().anyMatch(m -> !m.label().isEmpty())) {
+            labelMarkers(chart, xy, plot, fAxis, zAxis, lines, targetText, band.getLabel());
+        }
+        return chart;
+    }
+
+    /**
+     * The anti-resonance labels, each above (else below) its triangle where it covers no other label,
+     * nor the target's or the band's: the chart is laid out once off-screen to learn where its data area
+     * falls, and the labels are placed in pixels by {@link LabelPlacer}.
+     */
+    private static void labelMarkers(JFreeChart chart, XYPlot xy, ImpedancePlot plot, LogAxis fAxis, LogAxis zAxis,
+                                     XYLineAndShapeRenderer lines, String targetText, String bandText) {
+        ChartRenderingInfo info = new ChartRenderingInfo();
+        BufferedImage scratch = new BufferedImage(ChartStyle.WIDTH, ChartStyle.HEIGHT, BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = scratch.createGraphics();
+        try {
+            chart.draw(g, new Rectangle2D.Double(0, 0, ChartStyle.WIDTH, ChartStyle.HEIGHT), info);
+        } finally {
+            g.dispose();
+        }
+        Rectangle2D area = info.getPlotInfo().getDataArea();
+        double fLo = Math.log10(fAxis.getLowerBound());
+        double fHi = Math.log10(fAxis.getUpperBound());
+        double zLo = Math.log10(zAxis.getLowerBound());
+        double zHi = Math.log10(zAxis.getUpperBound());
+        java.util.function.DoubleUnaryOperator px = f -> area.getMinX() + (Math.log10(f) - fLo) / (fHi - fLo) * area.getWidth();
+        java.util.function.DoubleUnaryOperator py = z -> area.getMaxY() - (Math.log10(z) - zLo) / (zHi - zLo) * area.getHeight();
+        LabelPlacer placer = new LabelPlacer(NOTE_FONT, area);
+        // the target's label sits right-aligned just above its line; the band's at the band's top left
+        Rectangle2D t = placer.size(targetText);
+        double ty = py.applyAsDouble(plot.targetOhm());
+        placer.reserve(new Rectangle2D.Double(area.getMaxX() - 6 - t.getWidth() - 4, ty - 3 - t.getHeight() - 4,
+                t.getWidth() + 8, t.getHeight() + 8));
+        // and no label is struck through by the dashed target line
+        placer.reserve(new Rectangle2D.Double(area.getMinX(), ty - 2, area.getWidth(), 4));
+        Rectangle2D b = placer.size(bandText);
+        double bx = Math.max(area.getMinX(), px.applyAsDouble(plot.bandFromHz()));
+        placer.reserve(new Rectangle2D.Double(bx, area.getMinY(), b.getWidth() + 16, b.getHeight() + 12));
+        for (ImpedanceMarker m : plot.markers()) {
+            if (m.label().isEmpty()) {
+                continue;
+            }
+            Rectangle2D box = placer.place(m.label(), px.applyAsDouble(m.frequencyHz()),
+                    py.applyAsDouble(m.impedanceOhm()), 6);
+            if (box == null) {
+                continue; // no free place: the frequency is in the anti-resonance table
+            }
+            double zAt = Math.pow(10, zLo + (area.getMaxY() - box.getCenterY()) / area.getHeight() * (zHi - zLo));
+            XYTextAnnotation a = new XYTextAnnotation(m.label(), m.frequencyHz(), zAt);
+            a.setFont(NOTE_FONT);
+            a.setPaint(MARK);
+            a.setTextAnchor(TextAnchor.CENTER);
+            a.setBackgroundPaint(LABEL_BACKGROUND);
+            lines.addAnnotation(a);
+        }
     }
 
     /** A triangle pointing down, {@code s} from its centre to each side. */
