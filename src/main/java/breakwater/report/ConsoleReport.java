@@ -28,11 +28,14 @@ public final class ConsoleReport {
         String currency = scenario.cost().currency();
         line(b, "Rail", r.name().isEmpty() ? scenario.source() : r.name());
         line(b, "", volts(r.voltageV()) + " ± " + format(r.toleranceFraction(), FRACTION)
-                + " (" + volts(r.lowerLimitV()) + " .. " + volts(r.upperLimitV()) + "), load "
+                + " (" + volts(r.toleranceLowerV()) + " .. " + volts(r.toleranceUpperV()) + "), load "
                 + format(r.minCurrentA(), CURRENT) + " .. " + format(r.maxCurrentA(), CURRENT) + " (ΔI "
                 + format(r.currentStepA(), CURRENT) + "), "
                 + (r.hasEdgeTime() ? "edge time " + format(r.edgeTimeS(), TIME) : "ideal edges"));
-        line(b, "Target", "Z_t = " + format(r.targetImpedanceOhms(), RESISTANCE) + "  (V × tolerance / ΔI)");
+        if (r.hasBudget()) {
+            line(b, "Budget", budget(r));
+        }
+        line(b, "Target", "Z_t = " + format(r.targetImpedanceOhms(), RESISTANCE) + "  (" + targetRule(r) + ")");
         if (!footprintName.isEmpty()) {
             line(b, "Footprint", footprintName);
         }
@@ -92,6 +95,19 @@ public final class ConsoleReport {
             }
         }
         return b.toString();
+    }
+
+    /** The tolerance budget in words: set point, ripple, and what is left for the transient (console and report). */
+    static String budget(Rail r) {
+        return "set point ± " + format(r.setPointFraction(), FRACTION) + " (" + format(r.setPointV(), VOLTAGE)
+                + "), ripple " + format(r.rippleVpp(), VOLTAGE) + " peak-to-peak (± " + format(r.rippleVpp() / 2, VOLTAGE)
+                + "), left for the transient ± " + format(r.transientAllowanceV(), VOLTAGE) + " ("
+                + volts(r.lowerLimitV()) + " .. " + volts(r.upperLimitV()) + ")";
+    }
+
+    /** How the target impedance was computed, in words. */
+    static String targetRule(Rail r) {
+        return r.hasBudget() ? "(V × tolerance − V × set point − ripple/2) / ΔI" : "V × tolerance / ΔI";
     }
 
     /** The worst case's stated accuracy in words (console and report). */

@@ -55,11 +55,14 @@ public final class ReportBuilder {
 
         List<String> subtitle = new ArrayList<>();
         subtitle.add(ConsoleReport.volts(r.voltageV()) + " ± " + format(r.toleranceFraction(), FRACTION) + " ("
-                + ConsoleReport.volts(r.lowerLimitV()) + " .. " + ConsoleReport.volts(r.upperLimitV()) + "); load "
+                + ConsoleReport.volts(r.toleranceLowerV()) + " .. " + ConsoleReport.volts(r.toleranceUpperV()) + "); load "
                 + format(r.minCurrentA(), CURRENT) + " .. " + format(r.maxCurrentA(), CURRENT) + ", ΔI "
                 + format(r.currentStepA(), CURRENT) + "; "
                 + (r.hasEdgeTime() ? "edge time " + format(r.edgeTimeS(), TIME) : "ideal load edges"));
-        subtitle.add("Target impedance Z_t = V × tolerance / ΔI = " + format(r.targetImpedanceOhms(), RESISTANCE)
+        if (r.hasBudget()) {
+            subtitle.add("Tolerance budget: " + ConsoleReport.budget(r));
+        }
+        subtitle.add("Target impedance Z_t = " + ConsoleReport.targetRule(r) + " = " + format(r.targetImpedanceOhms(), RESISTANCE)
                 + "; band " + format(s.band().fromHz(), FREQUENCY) + " .. " + format(s.band().toHz(), FREQUENCY)
                 + (run.footprintName().isEmpty() ? "" : "; footprint " + run.footprintName()));
         subtitle.add("Scenario " + s.source() + (s.requireTarget() ? "; |Z| must also stay under the target" : ""));
