@@ -7,6 +7,9 @@ import breakwater.network.AntiResonance;
 import breakwater.scenario.Rail;
 import breakwater.scenario.Scenario;
 
+import breakwater.timedomain.DroopByAge;
+
+import java.util.List;
 import java.util.Locale;
 
 import static breakwater.units.EngineeringNotation.format;
@@ -69,6 +72,7 @@ public final class ConsoleReport {
         line(b, "", String.format(Locale.ROOT, "rogue factor %.2f: the worst excursion is %.2f × ΔI·Z_t (%s)",
                 wc.rogueFactor(), wc.rogueFactor(), format(r.currentStepA() * r.targetImpedanceOhms(), VOLTAGE)));
         line(b, "", accuracy(e.worstCase().relativeAccuracy()));
+        line(b, "", "droop from load activity older than: " + droopByAgeText(e));
         b.append('\n');
         var m = e.impedance();
         line(b, "Impedance", "peak " + format(m.peakOhms(), RESISTANCE) + " at " + format(m.peakHz(), FREQUENCY)
@@ -93,6 +97,35 @@ public final class ConsoleReport {
                         a.impedanceOhms() / m.targetOhms(), a.q(), ring,
                         rr.cyclesTo95Percent() > 0 ? Integer.toString(rr.cyclesTo95Percent()) : "-"));
             }
+        }
+        return b.toString();
+    }
+
+    /**
+     * The part of the worst droop due to load activity older than each of {@link DroopByAge#AGES_S}
+     * (docs/worst-case.md#droop-by-age), as shares of the droop (0 when there is no droop).
+     */
+    static List<double[]> droopByAge(Evaluation e) {
+        List<double[]> out = new java.util.ArrayList<>();
+        double droop = e.worstCase().droopOhms();
+        for (DroopByAge.Share s : DroopByAge.of(e.model(), e.worstCase().droopPattern())) {
+            out.add(new double[]{s.ageS(), s.olderOhms(), droop > 0 ? s.olderOhms() / droop : 0});
+        }
+        return out;
+    }
+
+    /** A share as a percentage with {@code digits} decimals; a share that rounds to zero is "0 %", never "-0 %". */
+    static String percent(double share, int digits) {
+        String t = String.format(Locale.ROOT, "%." + digits + "f", 100 * share);
+        return (t.matches("-0\\.?0*") ? t.substring(1) : t) + " %";
+    }
+
+    /** "10 ns gives 62 %, 100 ns 30 %, …" for the console and the report. */
+    static String droopByAgeText(Evaluation e) {
+        StringBuilder b = new StringBuilder();
+        for (double[] s : droopByAge(e)) {
+            b.append(b.isEmpty() ? "" : ", ").append(format(s[0], TIME)).append(' ')
+                    .append(percent(s[2], 0));
         }
         return b.toString();
     }

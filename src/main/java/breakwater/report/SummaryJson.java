@@ -77,6 +77,10 @@ public final class SummaryJson {
         w.put("droop_ohm", e.worstCase().droopOhms());
         w.put("overshoot_ohm", e.worstCase().overshootOhms());
         w.put("relative_accuracy", e.worstCase().relativeAccuracy());
+        ArrayNode ages = w.putArray("droop_older_than");
+        for (double[] s : ConsoleReport.droopByAge(e)) {
+            ages.addObject().put("age_s", s[0]).put("droop_v", r.currentStepA() * s[1]).put("share", s[2]);
+        }
         root.put("rogue_factor", wc.rogueFactor());
 
         var m = e.impedance();
