@@ -7,13 +7,18 @@ import picocli.CommandLine.Option;
 
 import java.util.Optional;
 
-/** {@code --monte-carlo N}, {@code --mc-seed}, {@code --spread}: part-to-part spread of the chosen bank. */
+/**
+ * {@code --monte-carlo N}, {@code --mc-seed}, {@code --spread}, {@code --mount-spread} and the plane, package
+ * and die spreads: part-to-part and layout spread of the chosen bank.
+ */
 final class MonteCarloOptions {
     @Option(names = "--monte-carlo", paramLabel = "N",
             description = {"Also judge N Monte Carlo samples of the bank (checked or found), each with its parts "
                     + "drawn within their tolerances (uniform): capacitance within the catalog's tolerance column, else by "
                     + "dielectric C0G 5 %%, X7R 10 %%, X5R 20 %%, polymer/tantalum/other 20 %%; ESR and ESL within "
-                    + "--spread. All parts of one type move together (one reel: the pessimistic choice). "
+                    + "--spread; mounting inductance within --mount-spread; plane, package and die values only "
+                    + "when asked (--plane-spread, --package-spread, --die-spread). All parts of one type move "
+                    + "together (one reel: the pessimistic choice). "
                     + "Reports the worst droop and overshoot distribution (p50, p95, p99, max) and the yield."})
     int samples;
 
@@ -24,6 +29,23 @@ final class MonteCarloOptions {
     @Option(names = "--spread", paramLabel = "PCT", converter = PercentConverter.class, defaultValue = "20",
             description = "ESR and ESL spread for --monte-carlo, in percent either side (default: ${DEFAULT-VALUE} %%).")
     double spreadFraction;
+
+    @Option(names = "--mount-spread", paramLabel = "PCT", converter = PercentConverter.class, defaultValue = "20",
+            description = "Mounting-inductance spread for --monte-carlo (footprint and via geometry, our default "
+                    + "choice), in percent either side (default: ${DEFAULT-VALUE} %%).")
+    double mountSpreadFraction;
+
+    @Option(names = "--plane-spread", paramLabel = "PCT", converter = PercentConverter.class, defaultValue = "0",
+            description = "Plane capacitance and resistance spread for --monte-carlo, percent either side (default: ${DEFAULT-VALUE}).")
+    double planeSpreadFraction;
+
+    @Option(names = "--package-spread", paramLabel = "PCT", converter = PercentConverter.class, defaultValue = "0",
+            description = "Package resistance and inductance spread for --monte-carlo, percent either side (default: ${DEFAULT-VALUE}).")
+    double packageSpreadFraction;
+
+    @Option(names = "--die-spread", paramLabel = "PCT", converter = PercentConverter.class, defaultValue = "0",
+            description = "Die capacitance and resistance spread for --monte-carlo, percent either side (default: ${DEFAULT-VALUE}).")
+    double dieSpreadFraction;
 
     boolean enabled() {
         if (samples < 0) {
@@ -38,7 +60,9 @@ final class MonteCarloOptions {
             return Optional.empty();
         }
         return Optional.of(new MonteCarlo.Settings(samples, seed != null ? seed : scenario.solver().seed(),
-                spreadFraction));
+                spreadFraction, mountSpreadFraction,
+                new MonteCarlo.StackupSpread(planeSpreadFraction, packageSpreadFraction, dieSpreadFraction),
+                MonteCarlo.CATALOG_OR_DIELECTRIC));
     }
 
     /** "20", "20%", "20 %" are all 20 %. */

@@ -3,6 +3,13 @@ package breakwater.design;
 import breakwater.catalog.BankEntry;
 import breakwater.catalog.Part;
 import breakwater.network.NetworkBuilder;
+import breakwater.network.PartBranches;
+import breakwater.network.PowerNetwork;
+import breakwater.scenario.Die;
+import breakwater.scenario.Footprint;
+import breakwater.scenario.PackagePath;
+import breakwater.scenario.Plane;
+import breakwater.scenario.Scenario;
 
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -19,10 +26,13 @@ import java.util.stream.IntStream;
  *
  * <p>In each sample every part TYPE of the bank gets one draw, shared by all its placed parts (a batch
  * from one reel moves together; this is the pessimistic choice, because n independent parts would
- * average out): capacitance × (1 + t·u₁), ESR × (1 + s·u₂), ESL × (1 + s·u₃), with u₁, u₂, u₃ uniform
- * on [−1, 1], t the part's capacitance tolerance ({@link ToleranceRule}) and s the ESR/ESL spread. The
- * mounting inductance belongs to the layout and is not drawn. Each sample is then judged with the
- * evaluator's exact worst case ({@link BankEvaluator#worstCaseVolts}).
+ * average out): capacitance × (1 + t·u₁), ESR × (1 + s·u₂), ESL × (1 + s·u₃), mounting inductance
+ * × (1 + m·u₄), with u₁ … u₄ uniform on [−1, 1], t the part's capacitance tolerance ({@link ToleranceRule}),
+ * s the ESR/ESL spread and m the mounting-inductance spread (footprint and via geometry; the mounting
+ * inductance is the catalog's or the footprint's, whichever the evaluator uses). When asked, each sample
+ * also draws the plane (C and R), the package path (R and L) and the die (C and R) within their own
+ * spreads ({@link StackupSpread}), one draw per value after the parts'. Each sample is then judged with
+ * the evaluator's exact worst case ({@link BankEvaluator#worstCaseVolts}).
  *
  * <p>Reproducible: sample k uses its own generator, seeded with the k-th number of a
  * {@link SplittableRandom} seeded with {@code seed}, and results are stored by index, so the outcome
@@ -38,6 +48,37 @@ public final class MonteCarlo {
     public static final double OTHER_TOLERANCE = 0.20;
     /** ESR and ESL spread when none is given: ±20 %. */
     public static final double DEFAULT_SPREAD = 0.20;
+    /**
+     * Mounting-inductance spread when none is given: ±20 %, our own choice (no published figure): pad and
+     * via geometry, drill and stack-up tolerances and the distance to the planes move the loop
+     * inductance of a footprint by tens of percent from one board build or placement to another.
+     */
+    public static final double DEFAULT_MOUNT_SPREAD = 0.20;
+
+    /**
+     * Spreads of the board and chip values, either side, in [0, 1): plane C and R, package R and L, die C and R.
+     *
+     * @param planeFraction   plane capacitance and resistance
+     * @param packageFraction package resistance and inductance
+     * @param dieFraction     die capacitance and resistance
+     */
+    public record StackupSpread(double planeFraction, double packageFraction, double dieFraction) {
+        /** Plane, package and die as given (the default). */
+        public static final StackupSpread NONE = new StackupSpread(0, 0, 0);
+
+        public StackupSpread {
+            for (double f : new double[]{planeFraction, packageFraction, dieFraction}) {
+                if (!(f >= 0 && f < 1)) {
+                    throw new IllegalArgumentException("plane, package and die spreads must be in 0 .. 100 % "
+                            + "(exclusive), got " + f);
+                }
+            }
+        }
+
+        public boolean any() {
+            return planeFraction > 0 || packageFraction > 0 || dieFraction > 0;
+        }
+    }
 
     private MonteCarlo() {
     }
@@ -69,14 +110,22 @@ public final class MonteCarlo {
     }
 
     /**
-     * @param samples        number of banks drawn, &ge; 1
-     * @param seed           seed of the whole run
-     * @param spreadFraction ESR and ESL spread, in [0, 1) (0.2 = ±20 %)
-     * @param tolerance      capacitance tolerance per part
+     * @param samples             number of banks drawn, &ge; 1
+     * @param seed                seed of the whole run
+     * @param spreadFraction      ESR and ESL spread, in [0, 1) (0.2 = ±20 %)
+     * @param mountSpreadFraction mounting-inductance spread, in [0, 1)
+     * @param stackup             plane, package and die spreads
+     * @param tolerance           capacitance tolerance per part
      */
-    public record Settings(int samples, long seed, double spreadFraction, ToleranceRule tolerance) {
+    public record Settings(int samples, long seed, double spreadFraction, double mountSpreadFraction,
+                           StackupSpread stackup, ToleranceRule tolerance) {
         public Settings {
             Objects.requireNonNull(tolerance, "tolerance");
+            Objects.requireNonNull(stackup, "stackup");
+            if (!(mountSpreadFraction >= 0 && mountSpreadFraction < 1)) {
+                throw new IllegalArgumentException("mounting-inductance spread must be in 0 .. 100 % (exclusive), got "
+                        + mountSpreadFraction);
+            }
             if (samples < 1) {
                 throw new IllegalArgumentException("Monte Carlo needs at least 1 sample, got " + samples);
             }
@@ -86,14 +135,20 @@ public final class MonteCarlo {
             }
         }
 
+        /** The parts' own spread only: no mounting-inductance, plane, package or die spread. */
+        public Settings(int samples, long seed, double spreadFraction, ToleranceRule tolerance) {
+            this(samples, seed, spreadFraction, 0, StackupSpread.NONE, tolerance);
+        }
+
+        /** The defaults: catalog or dielectric tolerances, {@link #DEFAULT_MOUNT_SPREAD}, no stack-up spread. */
         public Settings(int samples, long seed, double spreadFraction) {
-            this(samples, seed, spreadFraction, CATALOG_OR_DIELECTRIC);
+            this(samples, seed, spreadFraction, DEFAULT_MOUNT_SPREAD, StackupSpread.NONE, CATALOG_OR_DIELECTRIC);
         }
     }
 
     /** How one part type of the bank was varied. */
     public record PartSpread(String part, int count, double capacitanceTolerance, String toleranceSource,
-                             double spreadFraction) {
+                             double spreadFraction, double mountSpreadFraction) {
     }
 
     /**
@@ -201,7 +256,7 @@ public final class MonteCarlo {
                         + "(exclusive) for Monte Carlo, got " + tol[i]);
             }
             spreads.add(new PartSpread(p.name(), entries.get(i).count(), tol[i], toleranceSource(p),
-                    settings.spreadFraction()));
+                    settings.spreadFraction(), settings.mountSpreadFraction()));
         }
         long[] seeds = new long[settings.samples()];
         SplittableRandom root = new SplittableRandom(settings.seed());
@@ -212,9 +267,7 @@ public final class MonteCarlo {
         double[] over = new double[seeds.length];
         boolean[] pass = new boolean[seeds.length];
         IntStream.range(0, seeds.length).parallel().forEach(k -> {
-            List<BankEntry> drawn = sample(entries, tol, settings.spreadFraction(), seeds[k]);
-            WorstCaseVolts f = evaluator.worstCaseVolts(
-                    NetworkBuilder.build(evaluator.scenario(), drawn, evaluator.footprint()));
+            WorstCaseVolts f = evaluator.worstCaseVolts(network(evaluator, entries, tol, settings, seeds[k]));
             droop[k] = f.droopV();
             over[k] = f.overshootV();
             pass[k] = f.passes();
@@ -250,21 +303,58 @@ public final class MonteCarlo {
         }
     }
 
-    /** One sample: every part type drawn once from its own generator seeded with {@code sampleSeed}. */
-    static List<BankEntry> sample(List<BankEntry> entries, double[] tolerance, double spread, long sampleSeed) {
+    /** The network of one sample (see the class comment), drawn from a generator seeded with {@code sampleSeed}. */
+    static PowerNetwork network(BankEvaluator evaluator, List<BankEntry> entries, double[] tolerance, Settings settings,
+                                long sampleSeed) {
+        Scenario s = evaluator.scenario();
         SplittableRandom r = new SplittableRandom(sampleSeed);
+        List<BankEntry> drawn = sample(entries, tolerance, settings.spreadFraction(), settings.mountSpreadFraction(),
+                evaluator.footprint(), r);
+        StackupSpread st = settings.stackup();
+        // six draws, always in this order, whatever the spreads
+        double uPc = r.nextDouble(-1.0, 1.0);
+        double uPr = r.nextDouble(-1.0, 1.0);
+        double uKr = r.nextDouble(-1.0, 1.0);
+        double uKl = r.nextDouble(-1.0, 1.0);
+        double uDc = r.nextDouble(-1.0, 1.0);
+        double uDr = r.nextDouble(-1.0, 1.0);
+        Plane plane = s.plane().isPresent() ? new Plane(s.plane().capacitanceF() * (1 + st.planeFraction() * uPc),
+                s.plane().resistanceOhms() * (1 + st.planeFraction() * uPr)) : s.plane();
+        PackagePath pkg = s.packagePath().present() ? new PackagePath(true,
+                s.packagePath().resistanceOhms() * (1 + st.packageFraction() * uKr),
+                s.packagePath().inductanceH() * (1 + st.packageFraction() * uKl)) : s.packagePath();
+        Die die = s.die().isPresent() ? new Die(s.die().capacitanceF() * (1 + st.dieFraction() * uDc),
+                s.die().resistanceOhms() * (1 + st.dieFraction() * uDr)) : s.die();
+        // the drawn parts carry their resolved mounting inductance, so no footprint is applied again
+        return NetworkBuilder.build(s, drawn, Optional.empty(), plane, pkg, die);
+    }
+
+    /** One sample's parts, without mounting-inductance spread and footprint (for tests of the draws). */
+    static List<BankEntry> sample(List<BankEntry> entries, double[] tolerance, double spread, long sampleSeed) {
+        return sample(entries, tolerance, spread, 0, Optional.empty(), new SplittableRandom(sampleSeed));
+    }
+
+    /**
+     * Every part type drawn once from {@code r} (four draws each: C, ESR, ESL, mounting inductance); the
+     * drawn part's mounting inductance is the one the evaluator uses ({@code footprint}'s for its case, else
+     * the catalog's) times (1 + m·u₄).
+     */
+    static List<BankEntry> sample(List<BankEntry> entries, double[] tolerance, double spread, double mountSpread,
+                                  Optional<Footprint> footprint, SplittableRandom r) {
         List<BankEntry> out = new ArrayList<>(entries.size());
         for (int i = 0; i < entries.size(); i++) {
             BankEntry e = entries.get(i);
             Part p = e.part();
-            // three draws per type, always in this order, whatever the tolerances: widening a tolerance
+            // four draws per type, always in this order, whatever the tolerances: widening a tolerance
             // scales the same draws
             double uC = r.nextDouble(-1.0, 1.0);
             double uR = r.nextDouble(-1.0, 1.0);
             double uL = r.nextDouble(-1.0, 1.0);
+            double uM = r.nextDouble(-1.0, 1.0);
             Part drawn = new Part(p.name(), p.description(), p.caseCode(), p.dielectric(),
                     p.capacitanceF() * (1 + tolerance[i] * uC), p.esrOhms() * (1 + spread * uR),
-                    p.eslH() * (1 + spread * uL), p.mountInductanceH(), p.unitCost(), p.voltageRatingV(),
+                    p.eslH() * (1 + spread * uL),
+                    PartBranches.mountInductanceH(p, footprint) * (1 + mountSpread * uM), p.unitCost(), p.voltageRatingV(),
                     p.toleranceFraction(), p.dcBiasRetention(), p.maxCount());
             out.add(new BankEntry(drawn, e.count(), e.region()));
         }

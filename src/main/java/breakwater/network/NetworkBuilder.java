@@ -1,8 +1,11 @@
 package breakwater.network;
 
 import breakwater.catalog.BankEntry;
+import breakwater.scenario.Die;
 import breakwater.scenario.Footprint;
 import breakwater.scenario.Region;
+import breakwater.scenario.PackagePath;
+import breakwater.scenario.Plane;
 import breakwater.scenario.Scenario;
 
 import java.util.ArrayList;
@@ -21,11 +24,16 @@ public final class NetworkBuilder {
      * node behind the package, or at the board node when there is no package.
      */
     public static PowerNetwork build(Scenario scenario, List<BankEntry> bank, Optional<Footprint> footprint) {
+        return build(scenario, bank, footprint, scenario.plane(), scenario.packagePath(), scenario.die());
+    }
+
+    /** As {@link #build(Scenario, List, Optional)} with the given plane, package and die instead of the scenario's. */
+    public static PowerNetwork build(Scenario scenario, List<BankEntry> bank, Optional<Footprint> footprint,
+                                     Plane plane, PackagePath packagePath, Die die) {
         List<SeriesBranch> board = new ArrayList<>();
         List<SeriesBranch> load = new ArrayList<>();
-        if (scenario.plane().isPresent()) {
-            board.add(new SeriesBranch("plane", scenario.plane().resistanceOhms(), 0.0,
-                    scenario.plane().capacitanceF()));
+        if (plane.isPresent()) {
+            board.add(new SeriesBranch("plane", plane.resistanceOhms(), 0.0, plane.capacitanceF()));
         }
         List<RegionPath> regions = new ArrayList<>();
         for (Region r : scenario.regions()) {
@@ -46,16 +54,15 @@ public final class NetworkBuilder {
                 board.add(PartBranches.single(e.part(), footprint).parallel(e.count()));
             }
         }
-        boolean hasPackage = scenario.packagePath().present();
-        if (scenario.die().isPresent()) {
-            SeriesBranch die = new SeriesBranch("die", scenario.die().resistanceOhms(), 0.0,
-                    scenario.die().capacitanceF());
-            (hasPackage ? load : board).add(die);
+        boolean hasPackage = packagePath.present();
+        if (die.isPresent()) {
+            SeriesBranch dieBranch = new SeriesBranch("die", die.resistanceOhms(), 0.0, die.capacitanceF());
+            (hasPackage ? load : board).add(dieBranch);
         }
         return new PowerNetwork(scenario.regulator().resistanceOhms(), scenario.regulator().inductanceH(),
                 board, hasPackage,
-                hasPackage ? scenario.packagePath().resistanceOhms() : 0.0,
-                hasPackage ? scenario.packagePath().inductanceH() : 0.0,
+                hasPackage ? packagePath.resistanceOhms() : 0.0,
+                hasPackage ? packagePath.inductanceH() : 0.0,
                 load, regions);
     }
 }

@@ -7,6 +7,9 @@ import breakwater.network.AntiResonance;
 import breakwater.scenario.Rail;
 import breakwater.scenario.Scenario;
 
+import breakwater.timedomain.DroopByAge;
+
+import java.util.List;
 import java.util.Locale;
 
 import static breakwater.units.EngineeringNotation.format;
@@ -28,11 +31,14 @@ public final class ConsoleReport {
         String currency = scenario.cost().currency();
         line(b, "Rail", r.name().isEmpty() ? scenario.source() : r.name());
         line(b, "", volts(r.voltageV()) + " ± " + format(r.toleranceFraction(), FRACTION)
-                + " (" + volts(r.lowerLimitV()) + " .. " + volts(r.upperLimitV()) + "), load "
+                + " (" + volts(r.toleranceLowerV()) + " .. " + volts(r.toleranceUpperV()) + "), load "
                 + format(r.minCurrentA(), CURRENT) + " .. " + format(r.maxCurrentA(), CURRENT) + " (ΔI "
                 + format(r.currentStepA(), CURRENT) + "), "
                 + (r.hasEdgeTime() ? "edge time " + format(r.edgeTimeS(), TIME) : "ideal edges"));
-        line(b, "Target", "Z_t = " + format(r.targetImpedanceOhms(), RESISTANCE) + "  (V × tolerance / ΔI)");
+        if (r.hasBudget()) {
+            line(b, "Budget", budget(r));
+        }
+        line(b, "Target", "Z_t = " + format(r.targetImpedanceOhms(), RESISTANCE) + "  (" + targetRule(r) + ")");
         if (!footprintName.isEmpty()) {
             line(b, "Footprint", footprintName);
         }
@@ -69,6 +75,7 @@ public final class ConsoleReport {
         line(b, "", String.format(Locale.ROOT, "worst-case ratio %.2f: worst excursion / ΔI·Z_t (ΔI·Z_t = %s)",
                 wc.worstCaseRatio(), format(r.currentStepA() * r.targetImpedanceOhms(), VOLTAGE)));
         line(b, "", accuracy(e.worstCase().relativeAccuracy()));
+        line(b, "", "droop from load activity older than: " + droopByAgeText(e));
         b.append('\n');
         var m = e.impedance();
         line(b, "Impedance", "peak " + format(m.peakOhms(), RESISTANCE) + " at " + format(m.peakHz(), FREQUENCY)
@@ -100,6 +107,48 @@ public final class ConsoleReport {
                     + "the sine response reaches 95 % of its steady state; - where no mode rings)\n");
         }
         return b.toString();
+    }
+
+    /**
+     * The part of the worst droop due to load activity older than each of {@link DroopByAge#AGES_S}
+     * (docs/worst-case.md#droop-by-age), as shares of the droop (0 when there is no droop).
+     */
+    static List<double[]> droopByAge(Evaluation e) {
+        List<double[]> out = new java.util.ArrayList<>();
+        double droop = e.worstCase().droopOhms();
+        for (DroopByAge.Share s : DroopByAge.of(e.model(), e.worstCase().droopPattern())) {
+            out.add(new double[]{s.ageS(), s.olderOhms(), droop > 0 ? s.olderOhms() / droop : 0});
+        }
+        return out;
+    }
+
+    /** A share as a percentage with {@code digits} decimals; a share that rounds to zero is "0 %", never "-0 %". */
+    static String percent(double share, int digits) {
+        String t = String.format(Locale.ROOT, "%." + digits + "f", 100 * share);
+        return (t.matches("-0\\.?0*") ? t.substring(1) : t) + " %";
+    }
+
+    /** "10 ns gives 62 %, 100 ns 30 %, …" for the console and the report. */
+    static String droopByAgeText(Evaluation e) {
+        StringBuilder b = new StringBuilder();
+        for (double[] s : droopByAge(e)) {
+            b.append(b.isEmpty() ? "" : ", ").append(format(s[0], TIME)).append(' ')
+                    .append(percent(s[2], 0));
+        }
+        return b.toString();
+    }
+
+    /** The tolerance budget in words: set point, ripple, and what is left for the transient (console and report). */
+    static String budget(Rail r) {
+        return "set point ± " + format(r.setPointFraction(), FRACTION) + " (" + format(r.setPointV(), VOLTAGE)
+                + "), ripple " + format(r.rippleVpp(), VOLTAGE) + " peak-to-peak (± " + format(r.rippleVpp() / 2, VOLTAGE)
+                + "), left for the transient ± " + format(r.transientAllowanceV(), VOLTAGE) + " ("
+                + volts(r.lowerLimitV()) + " .. " + volts(r.upperLimitV()) + ")";
+    }
+
+    /** How the target impedance was computed, in words. */
+    static String targetRule(Rail r) {
+        return r.hasBudget() ? "(V × tolerance − V × set point − ripple/2) / ΔI" : "V × tolerance / ΔI";
     }
 
     /** The worst case's stated accuracy in words (console and report). */

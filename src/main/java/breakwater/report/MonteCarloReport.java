@@ -41,6 +41,7 @@ public final class MonteCarloReport {
                 s.samples(), s.seed(), format(s.spreadFraction(), FRACTION), seconds));
         b.append(String.format(Locale.ROOT, "%-10s each part type moves as one batch (all its parts together); "
                 + "capacitance within its tolerance, uniform%n", ""));
+        b.append(String.format(Locale.ROOT, "%-10s %s%n", "", layout(s)));
         b.append(String.format(Locale.ROOT, "  %-10s %10s %10s %10s %10s %10s %10s%n", "", "nominal", "p50", "p95",
                 "p99", "max", "allowed"));
         b.append(String.format(Locale.ROOT, "  %-10s %10s %10s %10s %10s %10s %10s%n", "droop",
@@ -55,6 +56,15 @@ public final class MonteCarloReport {
                 100 * r.yieldFraction(), ConsoleReport.volts(nom.lowerLimitV()), ConsoleReport.volts(nom.upperLimitV()),
                 r.passing(), s.samples()));
         return b.toString();
+    }
+
+    /** The layout and stack-up spreads in words. */
+    static String layout(MonteCarlo.Settings s) {
+        MonteCarlo.StackupSpread st = s.stackup();
+        return "mounting inductance within ±" + format(s.mountSpreadFraction(), FRACTION) + " per part type; "
+                + (st.any() ? "plane C and R within ±" + format(st.planeFraction(), FRACTION) + ", package R and L within ±"
+                + format(st.packageFraction(), FRACTION) + ", die C and R within ±" + format(st.dieFraction(), FRACTION)
+                : "plane, package and die as given");
     }
 
     public static ReportModel.Section section(MonteCarlo.Result r) {
@@ -88,10 +98,11 @@ public final class MonteCarloReport {
         String text = String.format(Locale.ROOT, "%d Monte Carlo samples were judged (seed %d, %.1f s). In each sample, every part type's "
                         + "capacitance is drawn uniformly within its tolerance and its ESR and ESL within ±%s; all "
                         + "parts of one type move together, as a batch from one reel would (the pessimistic "
-                        + "choice: independent parts would partly cancel). Mounting inductance is kept. Each "
+                        + "choice: independent parts would partly cancel). %s. Each "
                         + "sample's exact worst case is computed. Yield: %.1f %% of the samples keep V_min and "
                         + "V_max inside %s .. %s.",
-                s.samples(), s.seed(), seconds, format(s.spreadFraction(), FRACTION), 100 * r.yieldFraction(),
+                s.samples(), s.seed(), seconds, format(s.spreadFraction(), FRACTION),
+                Character.toUpperCase(layout(s).charAt(0)) + layout(s).substring(1), 100 * r.yieldFraction(),
                 ConsoleReport.volts(nom.lowerLimitV()), ConsoleReport.volts(nom.upperLimitV()));
         return new ReportModel.Section("Part-to-part spread (Monte Carlo)", List.of(text), List.of(dist, parts),
                 List.of(droopChart, overChart));
@@ -105,6 +116,10 @@ public final class MonteCarloReport {
         mc.put("samples", s.samples());
         mc.put("seed", s.seed());
         mc.put("spread", s.spreadFraction());
+        mc.put("mount_spread", s.mountSpreadFraction());
+        mc.put("plane_spread", s.stackup().planeFraction());
+        mc.put("package_spread", s.stackup().packageFraction());
+        mc.put("die_spread", s.stackup().dieFraction());
         mc.put("yield", r.yieldFraction());
         mc.put("passing", r.passing());
         mc.put("time_s", seconds);

@@ -55,11 +55,14 @@ public final class ReportBuilder {
 
         List<String> subtitle = new ArrayList<>();
         subtitle.add(ConsoleReport.volts(r.voltageV()) + " ± " + format(r.toleranceFraction(), FRACTION) + " ("
-                + ConsoleReport.volts(r.lowerLimitV()) + " .. " + ConsoleReport.volts(r.upperLimitV()) + "); load "
+                + ConsoleReport.volts(r.toleranceLowerV()) + " .. " + ConsoleReport.volts(r.toleranceUpperV()) + "); load "
                 + format(r.minCurrentA(), CURRENT) + " .. " + format(r.maxCurrentA(), CURRENT) + ", ΔI "
                 + format(r.currentStepA(), CURRENT) + "; "
                 + (r.hasEdgeTime() ? "edge time " + format(r.edgeTimeS(), TIME) : "ideal load edges"));
-        subtitle.add("Target impedance Z_t = V × tolerance / ΔI = " + format(r.targetImpedanceOhms(), RESISTANCE)
+        if (r.hasBudget()) {
+            subtitle.add("Tolerance budget: " + ConsoleReport.budget(r));
+        }
+        subtitle.add("Target impedance Z_t = " + ConsoleReport.targetRule(r) + " = " + format(r.targetImpedanceOhms(), RESISTANCE)
                 + "; band " + format(s.band().fromHz(), FREQUENCY) + " .. " + format(s.band().toHz(), FREQUENCY)
                 + (run.footprintName().isEmpty() ? "" : "; footprint " + run.footprintName()));
         subtitle.add("Scenario " + s.source() + (s.requireTarget() ? "; |Z| must also stay under the target" : ""));
@@ -159,6 +162,7 @@ public final class ReportBuilder {
                 .withChart(WorstCaseChart.svg(new WaveformPlot(
                         List.of(waveformSeries("worst-case overshoot pattern", run.overshoot())),
                         r.voltageV(), r.lowerLimitV(), r.upperLimitV()))));
+        sections.add(modelLimits(e, r));
         placement(s, e).ifPresent(sections::add);
         sections.addAll(run.extraSections());
 
@@ -179,13 +183,51 @@ public final class ReportBuilder {
         ReportModel.Table settingsTable = new ReportModel.Table("Settings", List.of("setting", "value"), settings);
 
         List<String> cautions = List.of(ReportModel.STANDARD_CAUTION,
-                "The worst case is exact for the lumped model only: it leaves out spreading inductance across the "
-                        + "planes, the regulator's control loop below its bandwidth, temperature and ageing of the "
-                        + "parts, and DC-bias derating beyond the catalog's single retention figure.",
+                "The worst case is exact for the lumped model only. The model leaves out: the regulator's control "
+                        + "loop (the regulator is its output impedance above its loop bandwidth, R + sL, so activity "
+                        + "slower than the loop is answered without loop delay, peaking or current limits, which "
+                        + "likely makes that part of the droop optimistic); spreading and mutual inductance beyond the "
+                        + "regions and footprints given (optimistic at the highest anti-resonances, where many "
+                        + "parts share planes and vias); ESR and capacitance that change with frequency, "
+                        + "temperature, ageing and DC bias beyond the catalog's single retention figure (the "
+                        + "damping of each anti-resonance, and so its worst case, can be off either way); and a "
+                        + "load whose current depends on its voltage (a constant-power load draws more as the "
+                        + "voltage sags, which makes the droop optimistic). See \"What the model leaves out\" above.",
                 "Keep every part inside its voltage, ripple-current and temperature ratings; check the real "
                         + "datasheets, not the catalog's typical values.");
         return new ReportModel("Breakwater — " + (r.name().isEmpty() ? s.source() : r.name()), subtitle, verdict, keys,
                 imp, wave, bom, resonances, sections, settingsTable, cautions);
+    }
+
+    /** The model's limits in plain words, with the part of the droop due to older load activity. */
+    private static ReportModel.Section modelLimits(Evaluation e, Rail r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (double[] s : ConsoleReport.droopByAge(e)) {
+            rows.add(List.of("older than " + format(s[0], TIME), format(r.currentStepA() * s[1], VOLTAGE),
+                    ConsoleReport.percent(s[2], 1)));
+        }
+        ReportModel.Table table = new ReportModel.Table("Part of the worst droop due to load activity older than "
+                + "each time before the worst instant (the pattern's response with the load held at I_min for "
+                + "that long before the worst instant)", List.of("load activity", "droop", "share"), rows);
+        return new ReportModel.Section("What the model leaves out", List.of(
+                "The regulator is modelled as its output impedance above its loop bandwidth (R + sL), with no "
+                        + "control loop. Activity slower than the loop is answered as by a plain inductance: no "
+                        + "loop delay, no impedance peak near the loop's crossover, no limit on how fast the "
+                        + "regulator's own inductor current can slew. A real loop rarely does better and often "
+                        + "does worse, so the part of the droop due to activity older than the loop's response "
+                        + "time (about 1/(2π·f_loop): 1.6 µs at 100 kHz, 16 µs at 10 kHz) rests on the regulator "
+                        + "model alone and is likely optimistic; check it against the regulator's own data or a "
+                        + "measurement. The table below says how much of the droop that is.",
+                "Spreading and mutual inductance beyond what the regions and footprints give: parts that share "
+                        + "planes and vias do not divide their mounting inductance by their count; this matters "
+                        + "most at the highest anti-resonances, where the model is then optimistic.",
+                "ESR and capacitance are constant with frequency (real ESR rises with frequency and "
+                        + "capacitance falls towards a part's own resonance); this sets the damping, and so the "
+                        + "worst case, of each anti-resonance, and can err either way.",
+                "The load draws a current that does not depend on its voltage. A constant-power load draws more "
+                        + "as the voltage sags (the droop is then optimistic); a load that behaves like a "
+                        + "resistance draws less (pessimistic). This matters most when the droop is a large share "
+                        + "of the voltage."), List.of(table), List.of());
     }
 
     /**

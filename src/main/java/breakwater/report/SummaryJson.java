@@ -48,6 +48,11 @@ public final class SummaryJson {
         rail.put("max_current_a", r.maxCurrentA());
         rail.put("current_step_a", r.currentStepA());
         rail.put("edge_time_s", r.edgeTimeS());
+        rail.put("set_point_accuracy", r.setPointFraction());
+        rail.put("ripple_v", r.rippleVpp());
+        rail.put("transient_allowance_v", r.transientAllowanceV());
+        rail.put("tolerance_lower_v", r.toleranceLowerV());
+        rail.put("tolerance_upper_v", r.toleranceUpperV());
         rail.put("target_impedance_ohm", r.targetImpedanceOhms());
         rail.put("lower_limit_v", r.lowerLimitV());
         rail.put("upper_limit_v", r.upperLimitV());
@@ -72,6 +77,10 @@ public final class SummaryJson {
         w.put("droop_ohm", e.worstCase().droopOhms());
         w.put("overshoot_ohm", e.worstCase().overshootOhms());
         w.put("relative_accuracy", e.worstCase().relativeAccuracy());
+        ArrayNode ages = w.putArray("droop_older_than");
+        for (double[] s : ConsoleReport.droopByAge(e)) {
+            ages.addObject().put("age_s", s[0]).put("droop_v", r.currentStepA() * s[1]).put("share", s[2]);
+        }
         root.put("worst_case_ratio", wc.worstCaseRatio());
 
         var m = e.impedance();

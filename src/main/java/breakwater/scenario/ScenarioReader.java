@@ -62,7 +62,7 @@ public final class ScenarioReader {
 
     static {
         SECTIONS.put("rail", List.of("name", "voltage", "tolerance", "max_current", "step", "current_step",
-                "edge_time"));
+                "edge_time", "set_point_accuracy", "ripple"));
         SECTIONS.put("band", List.of("from", "to"));
         SECTIONS.put("regulator", List.of("resistance", "inductance"));
         SECTIONS.put("plane", List.of("capacitance", "resistance"));
@@ -305,10 +305,51 @@ public final class ScenarioReader {
             if (edge < 0) {
                 valueError(List.of("rail", "edge_time"), "rail.edge_time must be >= 0 (0 for ideal edges)");
             }
+            double setPoint = optional("rail", "set_point_accuracy", Quantity.FRACTION, 0.0);
+            if (!(setPoint >= 0 && setPoint < 1) && !Double.isNaN(setPoint)) {
+                valueError(List.of("rail", "set_point_accuracy"), "rail.set_point_accuracy "
+                        + shown("rail", "set_point_accuracy") + " is outside [0, 100 %), it is the regulator's"
+                        + " set-point accuracy either side of nominal, e.g. \"1 %\"");
+            }
+            double rippleVpp = ripple(voltage);
             if (problems.isEmpty()) {
-                return new Rail(name, voltage, tolerance, maxCurrent, stepA, edge);
+                double left = tolerance - setPoint - rippleVpp / (2 * voltage);
+                if (!Rail.leavesRoom(voltage, tolerance, setPoint, rippleVpp)) {
+                    List<String> at = has("rail", "ripple") ? List.of("rail", "ripple") : List.of("rail", "set_point_accuracy");
+                    valueError(at, String.format(java.util.Locale.ROOT, "the tolerance budget leaves nothing for the"
+                                    + " load transient: rail.tolerance %s less rail.set_point_accuracy %s less half of"
+                                    + " rail.ripple %s (peak-to-peak) is %s of %s; lower the set-point accuracy or the"
+                                    + " ripple, or widen the tolerance",
+                            shown("rail", "tolerance"), has("rail", "set_point_accuracy") ? shown("rail", "set_point_accuracy") : "0",
+                            has("rail", "ripple") ? shown("rail", "ripple") : "0",
+                            EngineeringNotation.format(left * voltage, Quantity.VOLTAGE),
+                            EngineeringNotation.format(voltage, Quantity.VOLTAGE)));
+                    return null;
+                }
+                return new Rail(name, voltage, tolerance, maxCurrent, stepA, edge, setPoint, rippleVpp);
             }
             return null;
+        }
+
+        /**
+         * rail.ripple, volts peak-to-peak: a voltage ("12 mV", or a plain number in volts) or a share of the
+         * nominal voltage ("0.5 %"); 0 when absent.
+         */
+        private double ripple(double voltage) {
+            if (!has("rail", "ripple")) {
+                return 0.0;
+            }
+            boolean percent = isText("rail", "ripple") && section("rail").get().get("ripple").asText().strip().endsWith("%");
+            double v = optional("rail", "ripple", percent ? Quantity.FRACTION : Quantity.VOLTAGE, 0.0);
+            if (Double.isNaN(v)) {
+                return 0.0;
+            }
+            if (!(v >= 0)) {
+                valueError(List.of("rail", "ripple"), "rail.ripple " + shown("rail", "ripple") + " is negative, it is"
+                        + " the regulator's output ripple peak-to-peak, e.g. \"12 mV\" or \"0.5 %\"");
+                return 0.0;
+            }
+            return percent ? v * voltage : v;
         }
 
         private Band band() {

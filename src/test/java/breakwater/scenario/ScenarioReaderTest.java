@@ -349,6 +349,36 @@ class ScenarioReaderTest {
     }
 
     @Test
+    void setPointAccuracyAndRippleDefaultToZeroAndReadAsVoltsOrPercent() throws Exception {
+        Rail none = parse(BASE).rail();
+        assertThat(none.setPointFraction()).isZero();
+        assertThat(none.rippleVpp()).isZero();
+        Rail volts = parse(BASE.replace("max_current = \"2 A\"\n",
+                "max_current = \"2 A\"\nset_point_accuracy = \"1 %\"\nripple = \"12 mV\"\n")).rail();
+        assertClose(volts.setPointFraction(), 0.01);
+        assertClose(volts.rippleVpp(), 12e-3);
+        // 50 mV − 10 mV − 6 mV
+        assertClose(volts.transientAllowanceV(), 34e-3);
+        Rail percent = parse(BASE.replace("max_current = \"2 A\"\n", "max_current = \"2 A\"\nripple = \"0.5 %\"\n")).rail();
+        assertClose(percent.rippleVpp(), 5e-3);
+        Rail plain = parse(BASE.replace("max_current = \"2 A\"\n", "max_current = \"2 A\"\nripple = 0.004\n")).rail();
+        assertClose(plain.rippleVpp(), 4e-3);
+    }
+
+    @Test
+    void aToleranceBudgetThatLeavesNothingForTheTransientIsRefusedAtTheRipple() {
+        // 5 % of 1.0 V = 50 mV; 3 % set point (30 mV) and 40 mV of ripple (±20 mV) use all of it
+        assertThat(onlyProblem(BASE.replace("max_current = \"2 A\"\n",
+                "max_current = \"2 A\"\nset_point_accuracy = \"3 %\"\nripple = \"40 mV\"\n")))
+                .startsWith("rail.toml:6:10: ").contains("leaves nothing for the load transient")
+                .contains("rail.set_point_accuracy \"3 %\"").contains("lower the set-point");
+        assertThat(onlyProblem(BASE.replace("max_current = \"2 A\"\n", "max_current = \"2 A\"\nset_point_accuracy = \"5 %\"\n")))
+                .startsWith("rail.toml:5:22: ").contains("leaves nothing");
+        assertThat(onlyProblem(BASE.replace("max_current = \"2 A\"\n", "max_current = \"2 A\"\nripple = \"-1 mV\"\n")))
+                .startsWith("rail.toml:5:10: ").contains("rail.ripple \"-1 mV\" is negative");
+    }
+
+    @Test
     void negativeEdgeTimeIsRefused() {
         assertThat(onlyProblem(BASE.replace("max_current = \"2 A\"\n", "max_current = \"2 A\"\nedge_time = \"-1 ns\"\n")))
                 .startsWith("rail.toml:5:13: ").contains("rail.edge_time must be >= 0");
