@@ -25,6 +25,48 @@ public final class OutputDirectory {
         return dir;
     }
 
+    /**
+     * Checks, before any work, that the folder {@code dir} exists or can be created: the nearest folder
+     * above it that exists must take a new folder (tried with an empty one, removed at once).
+     *
+     * @param shown how the user wrote the folder, for the message
+     * @throws IOException saying which folder refuses and why, and what to do
+     */
+    public static void checkCreatable(Path dir, String shown) throws IOException {
+        Path abs = dir.toAbsolutePath().normalize();
+        if (Files.isDirectory(abs)) {
+            if (!Files.isWritable(abs)) {
+                throw new IOException("cannot write the results into '" + shown + "': the folder is not writable "
+                        + "(permission denied); choose a folder you can write to");
+            }
+            return;
+        }
+        Path existing = abs.getParent();
+        while (existing != null && !Files.exists(existing)) {
+            existing = existing.getParent();
+        }
+        if (existing == null) {
+            throw new IOException("cannot create the folder '" + shown + "' for the results: no folder above it "
+                    + "exists; give a folder on a mounted drive");
+        }
+        if (!Files.isDirectory(existing)) {
+            throw new IOException("cannot create the folder '" + shown + "' for the results: '" + existing
+                    + "' is a file, not a folder; choose another --out");
+        }
+        Path probe;
+        try {
+            probe = Files.createTempDirectory(existing, ".breakwater-");
+        } catch (IOException e) {
+            String why = e instanceof java.nio.file.AccessDeniedException ? "permission denied"
+                    : e instanceof java.nio.file.NoSuchFileException ? "that file system takes no new folders"
+                    : e instanceof java.nio.file.FileSystemException f && f.getReason() != null ? f.getReason()
+                    : e.getClass().getSimpleName();
+            throw new IOException("cannot create the folder '" + shown + "' for the results: '" + existing
+                    + "' does not let a folder be made in it (" + why + "); choose a folder you can write to", e);
+        }
+        Files.deleteIfExists(probe);
+    }
+
     /** Something that writes a file's content. */
     @FunctionalInterface
     public interface Content {
