@@ -193,11 +193,13 @@ public final class BankFileReader {
                 problems.error(source, countCell.line(), countCell.column(), "count '" + v
                         + "' is not a whole number, a count is a whole number >= 0");
             } else {
-                try {
-                    count = Integer.parseInt(v.startsWith("+") ? v.substring(1) : v);
-                } catch (NumberFormatException e) {
+                String digits = (v.startsWith("+") ? v.substring(1) : v).replaceFirst("^0+(?=\\d)", "");
+                if (digits.length() > 6 || Integer.parseInt(digits) > BankEntry.MAX_COUNT) {
                     problems.error(source, countCell.line(), countCell.column(), "count '" + v
-                            + "' is too large, a count is at most " + Integer.MAX_VALUE);
+                            + "' is too large, a count is at most " + BankEntry.MAX_COUNT
+                            + " (the most parts of one type breakwater places)");
+                } else {
+                    count = Integer.parseInt(digits);
                 }
             }
             if (part.isPresent() && count > 0 && regionOk) {

@@ -11,10 +11,18 @@ import java.util.Optional;
  * @param parts  the parts; names are unique
  */
 public record Catalog(String source, List<Part> parts) {
+    /**
+     * The most parts a catalog may list: a large stockroom's worth, and with {@link BankEntry#MAX_COUNT}
+     * the bound that keeps a bank's total count a whole number without overflow.
+     */
+    public static final int MAX_PARTS = 20_000;
 
     public Catalog {
         Objects.requireNonNull(source, "source");
         parts = List.copyOf(parts);
+        if (parts.size() > MAX_PARTS) {
+            throw new IllegalArgumentException("a catalog lists at most " + MAX_PARTS + " parts, got " + parts.size());
+        }
         long distinct = parts.stream().map(Part::name).distinct().count();
         if (distinct != parts.size()) {
             throw new IllegalArgumentException("part names in a catalog must be unique");

@@ -91,6 +91,12 @@ public final class CatalogReader {
         Map<String, Integer> firstLineOfPart = new HashMap<>();
         if (headerComplete) {
             for (CsvTable.Row row : table.rows) {
+                if (parts.size() == Catalog.MAX_PARTS) {
+                    problems.error(source, row.line(), 1, "the catalog lists more than " + Catalog.MAX_PARTS
+                            + " parts, the most breakwater reads from one catalog; split it or keep the parts"
+                            + " this rail can use");
+                    break;
+                }
                 readRow(row, table.header.size(), columns, source, problems, firstLineOfPart)
                         .ifPresent(parts::add);
             }
@@ -295,12 +301,13 @@ public final class CatalogReader {
                 error(cell, column + " '" + v + "' is not a whole number, it must be a whole number >= 0");
                 return -1;
             }
-            try {
-                return Integer.parseInt(v.startsWith("+") ? v.substring(1) : v);
-            } catch (NumberFormatException e) {
-                error(cell, column + " '" + v + "' is too large, it must be at most " + Integer.MAX_VALUE);
+            String digits = (v.startsWith("+") ? v.substring(1) : v).replaceFirst("^0+(?=\\d)", "");
+            if (digits.length() > 6 || Integer.parseInt(digits) > BankEntry.MAX_COUNT) {
+                error(cell, column + " '" + v + "' is too large, it must be at most " + BankEntry.MAX_COUNT
+                        + " (the most parts of one type breakwater places)");
                 return -1;
             }
+            return Integer.parseInt(digits);
         }
     }
 }

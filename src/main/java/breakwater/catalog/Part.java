@@ -68,8 +68,9 @@ public record Part(
         if (!Double.isNaN(toleranceFraction) && !(toleranceFraction >= 0 && toleranceFraction <= 1)) {
             throw new IllegalArgumentException(name + ": tolerance must be in 0..100 %, got " + toleranceFraction);
         }
-        if (maxCount < -1) {
-            throw new IllegalArgumentException(name + ": max count must be >= 0 or -1 for none");
+        if (maxCount < -1 || maxCount > BankEntry.MAX_COUNT) {
+            throw new IllegalArgumentException(name + ": max count must be in 0 .. " + BankEntry.MAX_COUNT
+                    + " or -1 for none");
         }
     }
 

@@ -53,6 +53,7 @@ final class CompareCommand implements Callable<Integer> {
         if (!output.footprint.isEmpty()) {
             throw new UsageException("compare takes --footprints A,B,... (plural), not --footprint");
         }
+        var target = output.target(); // an --out that cannot be made is said before any work
         Inputs in = scenario.load("");
         List<String> names = FootprintNames.chosen(footprintNames, in.scenario());
         var given = bankFile == null ? Optional.<breakwater.design.CapacitorBank>empty() : Optional.of(in.bank(bankFile));
@@ -60,7 +61,7 @@ final class CompareCommand implements Callable<Integer> {
         try (Searches progress = new Searches(spec.commandLine().getErr(), output.silent(), true)) {
             CompareResult r = CompareResult.compare(in.scenario(), names, given,
                     Optional.ofNullable(bankFile).map(Inputs::display), in.catalog().parts(), settings, progress);
-            CompareReport.write(r, output.target(), spec.commandLine().getOut());
+            CompareReport.write(r, target, spec.commandLine().getOut());
             return ExitCodes.of(r.verdict());
         }
     }

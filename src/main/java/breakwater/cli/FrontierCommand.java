@@ -34,8 +34,15 @@ final class FrontierCommand implements Callable<Integer> {
     ScenarioArgument scenario;
 
     @Option(names = "--points", paramLabel = "K", defaultValue = "6",
-            description = "Number of excursion limits, at least 2 (default: ${DEFAULT-VALUE}).")
+            description = "Number of excursion limits, 2 to " + FrontierCommand.MAX_POINTS + " (default: "
+                    + "${DEFAULT-VALUE}); each of the K + 1 searches needs at least " + FrontierCommand.MIN_SEARCH_MS
+                    + " ms of the time limit unless --moves bounds it.")
     int points;
+
+    /** The most limits a frontier has: a curve of 50 points is as fine as a chart or a table can show. */
+    static final int MAX_POINTS = 50;
+    /** The least time a search of the frontier is given; shorter ones end before the first bank is judged. */
+    static final long MIN_SEARCH_MS = 200;
 
     @Mixin
     OutputOptions output;
@@ -45,17 +52,32 @@ final class FrontierCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        if (points < 2) {
-            throw new UsageException("--points must be at least 2 (the tightest limit and the spec's), got " + points);
+        if (points < 2 || points > MAX_POINTS) {
+            throw new UsageException("--points is 2 (the tightest limit and the spec's) to " + MAX_POINTS + ", got "
+                    + points);
         }
+        var target = output.target(); // an --out that cannot be made is said before any work
         Inputs in = scenario.load(output.footprint);
         BankEvaluator judge = new BankEvaluator(in.scenario(), in.footprint());
         var settings = search.settings(in.scenario());
+        long shareMs = settings.timeLimit().toMillis() / (points + 1);
+        if (settings.moveLimit() == 0 && shareMs < MIN_SEARCH_MS) {
+            long fit = Math.max(1, settings.timeLimit().toMillis() / MIN_SEARCH_MS - 1);
+            throw new UsageException("--points " + points + " leaves each of the " + (points + 1) + " searches "
+                    + shareMs + " ms of the " + seconds(settings.timeLimit().toMillis()) + " time limit, under the "
+                    + MIN_SEARCH_MS + " ms a search needs; " + (fit >= 2 ? "at most " + fit + " points fit, or " : "")
+                    + "give a longer --time-limit (at least "
+                    + seconds(MIN_SEARCH_MS * (points + 1)) + ")");
+        }
         try (Searches progress = new Searches(spec.commandLine().getErr(), output.silent(), true)) {
             FrontierResult r = FrontierResult.frontier(judge, output.footprint, in.catalog().parts(), settings, points,
                     progress);
-            FrontierReport.write(r, output.target(), spec.commandLine().getOut());
+            FrontierReport.write(r, target, spec.commandLine().getOut());
             return ExitCodes.of(r.verdict());
         }
+    }
+
+    private static String seconds(long millis) {
+        return String.format(java.util.Locale.ROOT, "%.1f s", millis / 1000.0);
     }
 }

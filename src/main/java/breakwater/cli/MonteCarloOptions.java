@@ -19,8 +19,9 @@ final class MonteCarloOptions {
                     + "--spread; mounting inductance within --mount-spread; plane, package and die values only "
                     + "when asked (--plane-spread, --package-spread, --die-spread). All parts of one type move "
                     + "together (one reel: the pessimistic choice). "
-                    + "Reports the worst droop and overshoot distribution (p50, p95, p99, max) and the yield."})
-    int samples;
+                    + "Reports the worst droop and overshoot distribution (p50, p95, p99, max) and the yield. "
+                    + "N is 1 to 1000000; the statistics take about 64 bytes of heap per sample."})
+    Integer samples;
 
     @Option(names = "--mc-seed", paramLabel = "N",
             description = "Seed of the Monte Carlo samples (default: [solver] seed, else 1); same seed, same samples.")
@@ -48,10 +49,22 @@ final class MonteCarloOptions {
     double dieSpreadFraction;
 
     boolean enabled() {
-        if (samples < 0) {
-            throw new UsageException("--monte-carlo must be >= 1 (number of samples), got " + samples);
+        if (samples == null) {
+            return false;
         }
-        return samples > 0;
+        if (samples < 1 || samples > MonteCarlo.MAX_SAMPLES) {
+            throw new UsageException("--monte-carlo is the number of samples, 1 to " + MonteCarlo.MAX_SAMPLES
+                    + ", got " + samples + (samples == 0 ? "; leave the option out to draw none" : ""));
+        }
+        long needMb = samples * MonteCarlo.BYTES_PER_SAMPLE / (1024 * 1024) + 1;
+        Runtime rt = Runtime.getRuntime();
+        long heapMb = rt.maxMemory() / (1024 * 1024);
+        if (needMb > heapMb / 2) {
+            throw new UsageException("--monte-carlo " + samples + " needs about " + needMb + " MB of heap for its "
+                    + "statistics, more than half of the " + heapMb + " MB this Java allows; draw fewer samples, or "
+                    + "give more heap (BREAKWATER_JAVA_OPTS=-Xmx" + Math.max(1, 4 * needMb / 1024 + 1) + "g)");
+        }
+        return true;
     }
 
     /** The draws asked for (seed: --mc-seed, else the scenario's [solver] seed), or none without --monte-carlo. */

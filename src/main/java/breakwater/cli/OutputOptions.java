@@ -16,6 +16,10 @@ final class OutputOptions {
     static final class FolderConverter implements picocli.CommandLine.ITypeConverter<Path> {
         @Override
         public Path convert(String value) {
+            if (value.isBlank()) {
+                throw new picocli.CommandLine.TypeConversionException("'" + value + "' names no folder; give the "
+                        + "folder for the results, e.g. --out results (it is created if missing)");
+            }
             Path p;
             try {
                 p = Path.of(value);
@@ -46,6 +50,13 @@ final class OutputOptions {
 
     /** Where the results go; {@code quiet} also when the JSON takes standard output. */
     ResultWriter.Target target() {
+        if (out != null) {
+            try {
+                breakwater.report.OutputDirectory.checkCreatable(out, Inputs.display(out));
+            } catch (java.io.IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        }
         return new ResultWriter.Target(json, quiet, outDir(), out == null ? "" : Inputs.display(out), java.util.List.of());
     }
 

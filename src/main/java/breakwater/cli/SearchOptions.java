@@ -23,7 +23,7 @@ final class SearchOptions {
     long moves;
 
     @Option(names = "--solvers", paramLabel = "N",
-            description = "Independent solvers run in parallel (default: one per core, at most 4).")
+            description = "Independent solvers run in parallel, 1 to 64 (default: one per core, at most 4).")
     Integer solvers;
 
     SearchSettings settings(Scenario scenario) {
@@ -37,8 +37,10 @@ final class SearchOptions {
             settings = settings.withMoveLimit(moves);
         }
         if (solvers != null) {
-            if (solvers < 1) {
-                throw new UsageException("--solvers must be >= 1");
+            if (solvers < 1 || solvers > SearchSettings.MAX_SOLVERS) {
+                throw new UsageException("--solvers is 1 to " + SearchSettings.MAX_SOLVERS + " (this machine has "
+                        + Runtime.getRuntime().availableProcessors() + " cores; solvers beyond them share them), got "
+                        + solvers);
             }
             settings = settings.withSolvers(solvers);
         }

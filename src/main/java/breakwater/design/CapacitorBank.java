@@ -65,8 +65,12 @@ public record CapacitorBank(List<BankEntry> entries) {
         return new CapacitorBank(list);
     }
 
+    /**
+     * Parts in total: exact, since a count is at most {@link BankEntry#MAX_COUNT} and a bank holds at most
+     * {@link breakwater.catalog.Catalog#MAX_PARTS} types (the sum is taken in {@code long} and checked).
+     */
     public int totalParts() {
-        return entries.stream().mapToInt(BankEntry::count).sum();
+        return Math.toIntExact(entries.stream().mapToLong(BankEntry::count).sum());
     }
 
     /** Distinct part numbers (a part placed in two regions is one line item). */

@@ -80,6 +80,20 @@ public final class MonteCarlo {
         }
     }
 
+    /**
+     * The most samples one run draws: a million, far past the point where the p99 of a yield study stops
+     * moving, and about 64 MB of statistics ({@link #BYTES_PER_SAMPLE}).
+     */
+    public static final int MAX_SAMPLES = 1_000_000;
+    /**
+     * Heap a run keeps per sample, estimated: the worst droop and overshoot (8 bytes each) in the result,
+     * its defensive copies and the sorted copies of the percentiles and histograms (four more of each).
+     * The draws themselves are made and judged in blocks of {@link #BLOCK} samples and then dropped.
+     */
+    public static final long BYTES_PER_SAMPLE = 64;
+    /** Samples drawn and judged together before their seeds and pass flags are dropped. */
+    static final int BLOCK = 4096;
+
     private MonteCarlo() {
     }
 
@@ -126,8 +140,8 @@ public final class MonteCarlo {
                 throw new IllegalArgumentException("mounting-inductance spread must be in 0 .. 100 % (exclusive), got "
                         + mountSpreadFraction);
             }
-            if (samples < 1) {
-                throw new IllegalArgumentException("Monte Carlo needs at least 1 sample, got " + samples);
+            if (samples < 1 || samples > MAX_SAMPLES) {
+                throw new IllegalArgumentException("Monte Carlo draws 1 to " + MAX_SAMPLES + " samples, got " + samples);
             }
             if (!(spreadFraction >= 0 && spreadFraction < 1)) {
                 throw new IllegalArgumentException("ESR/ESL spread must be in 0 .. 100 % (exclusive), got "
@@ -243,6 +257,11 @@ public final class MonteCarlo {
      * @throws IllegalArgumentException when a part's capacitance tolerance is not in [0, 1)
      */
     public static Result run(BankEvaluator evaluator, CapacitorBank bank, Settings settings) {
+        return run(evaluator, bank, settings, BLOCK);
+    }
+
+    /** As {@link #run(BankEvaluator, CapacitorBank, Settings)}, drawing {@code block} samples at a time. */
+    static Result run(BankEvaluator evaluator, CapacitorBank bank, Settings settings, int block) {
         long t0 = System.nanoTime();
         List<BankEntry> entries = bank.entries();
         int n = entries.size();
@@ -258,23 +277,29 @@ public final class MonteCarlo {
             spreads.add(new PartSpread(p.name(), entries.get(i).count(), tol[i], toleranceSource(p),
                     settings.spreadFraction(), settings.mountSpreadFraction()));
         }
-        long[] seeds = new long[settings.samples()];
+        int samples = settings.samples();
         SplittableRandom root = new SplittableRandom(settings.seed());
-        for (int k = 0; k < seeds.length; k++) {
-            seeds[k] = root.nextLong();
-        }
-        double[] droop = new double[seeds.length];
-        double[] over = new double[seeds.length];
-        boolean[] pass = new boolean[seeds.length];
-        IntStream.range(0, seeds.length).parallel().forEach(k -> {
-            WorstCaseVolts f = evaluator.worstCaseVolts(network(evaluator, entries, tol, settings, seeds[k]));
-            droop[k] = f.droopV();
-            over[k] = f.overshootV();
-            pass[k] = f.passes();
-        });
+        double[] droop = new double[samples];
+        double[] over = new double[samples];
         int passing = 0;
-        for (boolean b : pass) {
-            passing += b ? 1 : 0;
+        // block by block: sample k still takes the k-th seed of the root generator, whatever the block
+        long[] seeds = new long[Math.min(block, samples)];
+        boolean[] pass = new boolean[seeds.length];
+        for (int from = 0; from < samples; from += block) {
+            int base = from;
+            int size = Math.min(block, samples - from);
+            for (int j = 0; j < size; j++) {
+                seeds[j] = root.nextLong();
+            }
+            IntStream.range(0, size).parallel().forEach(j -> {
+                WorstCaseVolts f = evaluator.worstCaseVolts(network(evaluator, entries, tol, settings, seeds[j]));
+                droop[base + j] = f.droopV();
+                over[base + j] = f.overshootV();
+                pass[j] = f.passes();
+            });
+            for (int j = 0; j < size; j++) {
+                passing += pass[j] ? 1 : 0;
+            }
         }
         WorstCaseVolts nominal = evaluator.worstCaseVolts(
                 NetworkBuilder.build(evaluator.scenario(), entries, evaluator.footprint()));

@@ -17,6 +17,12 @@ import java.util.Objects;
  *                         multithreaded solving, so we run several seeded ones and keep the best)
  */
 public record SearchSettings(Duration timeLimit, Duration unimprovedLimit, long moveLimit, long seed, int solvers) {
+    /**
+     * The most solvers one search runs: each holds its own working copy of the bank and scores, and on a
+     * machine with fewer cores the extra ones only share them.
+     */
+    public static final int MAX_SOLVERS = 64;
+
     public SearchSettings {
         Objects.requireNonNull(timeLimit, "timeLimit");
         Objects.requireNonNull(unimprovedLimit, "unimprovedLimit");
@@ -26,8 +32,8 @@ public record SearchSettings(Duration timeLimit, Duration unimprovedLimit, long 
         // the solver's time terminations work in whole milliseconds
         timeLimit = Duration.ofMillis(Math.max(1, timeLimit.toMillis()));
         unimprovedLimit = Duration.ofMillis(Math.max(1, unimprovedLimit.toMillis()));
-        if (moveLimit < 0 || solvers < 1) {
-            throw new IllegalArgumentException("move limit >= 0 and solvers >= 1 required");
+        if (moveLimit < 0 || solvers < 1 || solvers > MAX_SOLVERS) {
+            throw new IllegalArgumentException("move limit >= 0 and solvers in 1 .. " + MAX_SOLVERS + " required");
         }
     }
 

@@ -23,7 +23,7 @@ import java.util.Optional;
 
 /**
  * Writes what a run found: the console text or summary.json on standard output, and the result files of
- * {@code --out}, each written atomically ({@link OutputDirectory}). The mode reporters call it with the
+ * {@code --out}, moved in as one set ({@link OutputDirectory}). The mode reporters call it with the
  * bank the run shows and what their mode adds.
  */
 public final class ResultWriter {
@@ -91,7 +91,7 @@ public final class ResultWriter {
             out.print(Verdicts.console(run.verdict()));
         }
         if (target.outDir().isPresent()) {
-            OutputDirectory dir = new OutputDirectory(target.outDir().get());
+            try (OutputDirectory dir = new OutputDirectory(target.outDir().get(), target.outDirName())) {
             List<String> written = new ArrayList<>();
             String currency = scenario.cost().currency();
             dir.write("bom.csv", w -> CsvOutputs.writeBom(e, currency, w));
@@ -114,8 +114,10 @@ public final class ResultWriter {
             written.add("report.html");
             dir.write("summary.json", w -> SummaryJson.write(summary, w));
             written.add("summary.json");
+            dir.commit(); // the whole set at once, never mixed with another run's
             if (!target.quiet() && !target.json()) {
                 out.println("Wrote " + String.join(", ", written) + " to " + target.outDirName());
+            }
             }
         }
         out.flush();

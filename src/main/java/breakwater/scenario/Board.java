@@ -16,13 +16,22 @@ import java.util.OptionalInt;
 public record Board(int maxParts, int maxDistinct, Map<String, Integer> maxPerCase) {
     public static final Board UNLIMITED = new Board(-1, -1, Map.of());
 
+    /**
+     * The largest {@code max_parts} and {@code max_per_case} accepted: a million parts, more than any one
+     * rail of any board carries. A larger limit would limit nothing and only hides a typing slip.
+     */
+    public static final int MAX_PARTS = 1_000_000;
+    /** The largest {@code max_distinct} accepted: as many part types as a catalog may list. */
+    public static final int MAX_DISTINCT = 20_000;
+
     public Board {
         maxPerCase = Collections.unmodifiableMap(new LinkedHashMap<>(maxPerCase));
-        if (maxParts < -1 || maxDistinct < -1) {
-            throw new IllegalArgumentException("board limits must be >= 0");
+        if (maxParts < -1 || maxDistinct < -1 || maxParts > MAX_PARTS || maxDistinct > MAX_DISTINCT) {
+            throw new IllegalArgumentException("board limits must be in 0 .. " + MAX_PARTS + " (types: "
+                    + MAX_DISTINCT + ")");
         }
         for (var e : maxPerCase.entrySet()) {
-            if (e.getValue() < 0) {
+            if (e.getValue() < 0 || e.getValue() > MAX_PARTS) {
                 throw new IllegalArgumentException("max_per_case." + e.getKey() + " must be >= 0");
             }
         }

@@ -429,8 +429,8 @@ public final class ScenarioReader {
         }
 
         private Board board() {
-            int maxParts = integer(List.of("board", "max_parts"), 1, -1);
-            int maxDistinct = integer(List.of("board", "max_distinct"), 1, -1);
+            int maxParts = integer(List.of("board", "max_parts"), 1, Board.MAX_PARTS, -1);
+            int maxDistinct = integer(List.of("board", "max_distinct"), 1, Board.MAX_DISTINCT, -1);
             Map<String, Integer> perCase = new LinkedHashMap<>();
             Optional<ObjectNode> board = section("board");
             JsonNode table = board.map(b -> b.get("max_per_case")).orElse(null);
@@ -446,7 +446,7 @@ public final class ScenarioReader {
                             keyError(path, "'" + code + "' in [board.max_per_case] is not a case code, " + CaseCode.RULE);
                             continue;
                         }
-                        int n = integer(path, 0, -1);
+                        int n = integer(path, 0, Board.MAX_PARTS, -1);
                         if (n >= 0) {
                             perCase.put(code, n);
                         }
@@ -487,7 +487,7 @@ public final class ScenarioReader {
                 }
                 double r = regionValue(name, table, "resistance", Quantity.RESISTANCE);
                 double l = regionValue(name, table, "inductance", Quantity.INDUCTANCE);
-                int maxParts = integer(List.of("region", name, "max_parts"), 0, -1);
+                int maxParts = integer(List.of("region", name, "max_parts"), 0, Board.MAX_PARTS, -1);
                 Map<String, Integer> perCase = new LinkedHashMap<>();
                 JsonNode cases = table.get("max_per_case");
                 if (cases != null && !cases.isObject()) {
@@ -502,7 +502,7 @@ public final class ScenarioReader {
                                     + CaseCode.RULE);
                             continue;
                         }
-                        int n = integer(path, 0, -1);
+                        int n = integer(path, 0, Board.MAX_PARTS, -1);
                         if (n >= 0) {
                             perCase.put(code, n);
                         }
@@ -697,7 +697,8 @@ public final class ScenarioReader {
         }
 
         /** A whole number >= min, or {@code absent} if not given; a wrong value is reported, returns absent. */
-        private int integer(List<String> path, int min, int absent) {
+        /** A whole number in {@code min .. max}, else a located error (saying the range) and {@code absent}. */
+        private int integer(List<String> path, int min, int max, int absent) {
             JsonNode n = root;
             for (String p : path) {
                 n = n == null || !n.isObject() ? null : n.get(p);
@@ -705,13 +706,15 @@ public final class ScenarioReader {
             if (n == null) {
                 return absent;
             }
-            if (!n.isIntegralNumber() || !n.canConvertToInt()) {
-                valueError(path, dotted(path) + " must be a whole number >= " + min + (n.isTextual()
-                        ? ", written without quotes" : ""));
+            if (!n.isIntegralNumber()) {
+                valueError(path, dotted(path) + " must be a whole number from " + min + " to " + max
+                        + (n.isTextual() ? ", written without quotes" : ""));
                 return absent;
             }
-            if (n.asInt() < min) {
-                valueError(path, dotted(path) + " is " + n.asInt() + ", it must be >= " + min);
+            if (!n.canConvertToInt() || n.asInt() < min || n.asInt() > max) {
+                valueError(path, dotted(path) + " is " + n.asText() + ", it must be a whole number from " + min
+                        + " to " + max + (max == Board.MAX_PARTS ? " (the most parts breakwater places on one rail)"
+                        : max == Board.MAX_DISTINCT ? " (the most part types a catalog may list)" : ""));
                 return absent;
             }
             return n.asInt();

@@ -56,4 +56,54 @@ class HardLimitsIT {
         assertThat(traced.code()).as(traced.err()).isEqualTo(ExitCodes.INTERNAL);
         assertThat(traced.err()).contains("java.lang.OutOfMemoryError", "\tat ");
     }
+
+    /** Two runs of different rails into one --out at once: the folder ends with one run's files, whole. */
+    @Test
+    void twoRunsIntoOneFolderLeaveOneWholeSet(@TempDir Path dir) throws Exception {
+        Path out = dir.resolve("shared");
+        for (int round = 0; round < 2; round++) {
+            Path a = Files.createDirectories(dir.resolve("a" + round));
+            Path b = Files.createDirectories(dir.resolve("b" + round));
+            var first = java.util.concurrent.CompletableFuture.supplyAsync(() -> quietly(() -> launch(a, Map.of(),
+                    "check", "scenarios/drone-core.toml", "--bank", "scenarios/drone-core.bank.csv", "--out",
+                    out.toString(), "--quiet")));
+            var second = java.util.concurrent.CompletableFuture.supplyAsync(() -> quietly(() -> launch(b, Map.of(),
+                    "check", "scenarios/buoy-io.toml", "--bank", "scenarios/buoy-io.bank.csv", "--out",
+                    out.toString(), "--quiet", "--export", "spice")));
+            assertThat(first.get().code()).as(first.get().err()).isIn(0, 1);
+            assertThat(second.get().code()).as(second.get().err()).isIn(0, 1);
+            var summary = new com.fasterxml.jackson.databind.ObjectMapper().readTree(out.resolve("summary.json").toFile());
+            String rail = summary.path("rail").path("name").asText();
+            boolean buoy = Files.readString(ROOT.resolve("scenarios/buoy-io.toml")).contains(rail);
+            // every part of bom.csv is in summary.json's bank, and the report names the same rail
+            String bom = Files.readString(out.resolve("bom.csv"));
+            for (var part : summary.path("bank")) {
+                assertThat(bom).contains(part.path("part").asText() + ",");
+            }
+            assertThat(bom.lines().filter(l -> !l.startsWith("part,") && !l.startsWith("TOTAL,")).count())
+                    .isEqualTo(summary.path("bank").size());
+            assertThat(Files.readString(out.resolve("report.html"))).contains(htmlEscaped(rail));
+            // the SPICE decks belong to the buoy run only
+            assertThat(Files.exists(out.resolve("rail-droop.cir"))).isEqualTo(buoy);
+            try (var left = Files.list(dir)) {
+                assertThat(left.map(p -> p.getFileName().toString())).noneMatch(n -> n.contains("staging"));
+            }
+        }
+    }
+
+    private static String htmlEscaped(String s) {
+        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
+    }
+
+    interface Launch {
+        LauncherIT.Result run() throws Exception;
+    }
+
+    private static LauncherIT.Result quietly(Launch l) {
+        try {
+            return l.run();
+        } catch (Exception e) {
+            throw new IllegalStateException(e);
+        }
+    }
 }

@@ -406,7 +406,7 @@ class ScenarioReaderTest {
                 0603 = "-1 nH"
                 """;
         assertThat(problems(toml)).satisfiesExactly(
-                p -> assertThat(p).startsWith("rail.toml:16:13: ").contains("board.max_parts is 0, it must be >= 1"),
+                p -> assertThat(p).startsWith("rail.toml:16:13: ").contains("board.max_parts is 0, it must be a whole number from 1 to 1000000"),
                 p -> assertThat(p).startsWith("rail.toml:18:1: ").contains("'402' in [board.max_per_case] is not a case code"),
                 p -> assertThat(p).startsWith("rail.toml:19:8: ").contains("board.max_per_case.0805 must be a whole number"),
                 p -> assertThat(p).startsWith("rail.toml:21:1: ").contains("'0402x' in [footprint.two-via] is not a case code"),
