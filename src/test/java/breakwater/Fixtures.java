@@ -30,6 +30,12 @@ public final class Fixtures {
         public Board board = Board.UNLIMITED;
         public CostModel cost = new CostModel(0.004, 0.1, "EUR");
         public boolean requireTarget = false;
+        public java.util.List<breakwater.scenario.Region> regions = java.util.List.of();
+
+        public ScenarioBuilder regions(java.util.List<breakwater.scenario.Region> r) {
+            regions = r;
+            return this;
+        }
 
         public ScenarioBuilder rail(Rail r) {
             rail = r;
@@ -73,7 +79,7 @@ public final class Fixtures {
 
         public Scenario build() {
             return new Scenario("test.toml", rail, band, regulator, plane, packagePath, die, Path.of("catalog.csv"),
-                    board, Map.of(), cost, SolverSettings.DEFAULT, requireTarget, "");
+                    board, Map.of(), cost, SolverSettings.DEFAULT, requireTarget, "", 0.0, regions);
         }
     }
 

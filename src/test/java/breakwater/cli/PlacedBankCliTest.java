@@ -208,4 +208,23 @@ class PlacedBankCliTest {
             assertThat(c.has("moved_between_regions")).isTrue();
         }
     }
+
+    /** Monte Carlo draws a placed bank's parts in their regions, around the bank's own worst case. */
+    @Test
+    void monteCarloOfAPlacedBankStartsFromTheBanksOwnWorstCase(@TempDir Path dir) throws IOException {
+        Path sc = scenario(dir, "8 pH", "40 pH", "250 pH");
+        Path b = bank(dir, PLACED_BANK);
+        Run plain = run("check", sc.toString(), "--bank", b.toString(), "--json");
+        Run mc = run("check", sc.toString(), "--bank", b.toString(), "--monte-carlo", "8", "--json");
+        assertThat(mc.code()).as(mc.err()).isIn(ExitCodes.OK, ExitCodes.SPEC_NOT_MET);
+        JsonNode p = new ObjectMapper().readTree(plain.out());
+        JsonNode m = new ObjectMapper().readTree(mc.out());
+        double droop = p.path("worst_case").path("droop_v").asDouble();
+        JsonNode run = m.path("monte_carlo");
+        assertThat(run.path("samples").asInt()).isEqualTo(8);
+        assertThat(run.path("parts").size()).isEqualTo(6);
+        // the samples spread around the placed bank's own worst case (parts within about ±20 %)
+        assertThat(run.path("droop_v").path("p50").asDouble()).isBetween(0.8 * droop, 1.2 * droop);
+        assertThat(m.path("worst_case").path("droop_v").asDouble()).isEqualTo(droop);
+    }
 }
