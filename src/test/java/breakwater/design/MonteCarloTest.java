@@ -127,9 +127,14 @@ class MonteCarloTest {
 
     @Test
     void mountingDrawsStayWithinTheirSpreadAndStartFromTheFootprint() {
-        List<BankEntry> entries = bank(2, 3, 4, 5).entries();
-        double[] tol = {0.05, 0.1, 0.2, 0.0};
-        var footprint = Optional.of(new breakwater.scenario.Footprint("f", java.util.Map.of()));
+        // one part of case 0402, which the footprint lists (0.15 nH instead of the catalog's 0.3 nH)
+        Part cased = new Part("hf-100n-0402", "", "0402", "X7R", 100e-9, 30e-3, 0.3e-9, 0.3e-9, 0.004,
+                Double.NaN, Double.NaN, 1.0, -1);
+        List<BankEntry> entries = List.of(bank(2, 3, 4, 0).entries().get(0), bank(2, 3, 4, 0).entries().get(1),
+                new BankEntry(cased, 5));
+        double[] tol = {0.05, 0.1, 0.0};
+        var footprint = Optional.of(new breakwater.scenario.Footprint("f", java.util.Map.of("0402", 0.15e-9)));
+        assertThat(breakwater.network.PartBranches.mountInductanceH(cased, footprint)).isEqualTo(0.15e-9);
         for (long seed = 0; seed < 100; seed++) {
             List<BankEntry> drawn = MonteCarlo.sample(entries, tol, 0.2, 0.25, footprint,
                     new java.util.SplittableRandom(seed));
