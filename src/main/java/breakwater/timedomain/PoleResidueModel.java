@@ -3,6 +3,8 @@ package breakwater.timedomain;
 import breakwater.network.PowerNetwork;
 import breakwater.network.SeriesBranch;
 
+import java.util.List;
+
 /**
  * The impedance at the load node in pole–residue form (docs/worst-case.md#pole-residue-form):
  * <pre>
@@ -268,81 +270,82 @@ public final class PoleResidueModel {
      * inductance-free one; Y = a/s + b/s² ⇒ Z = s/a − b/a² + O(1/s).
      */
     static HighFrequencyLimit highFrequencyLimit(PowerNetwork net) {
-        double gB = 0; // Y_b(∞), conductance of inductance-free elements at the board node (may be +∞)
-        double aB = 0;
-        double bB = 0;
-        if (net.regulatorInductanceH() == 0) {
-            gB += 1 / net.regulatorResistanceOhms();
-        } else {
-            aB += 1 / net.regulatorInductanceH();
-            bB -= net.regulatorResistanceOhms() / sq(net.regulatorInductanceH());
-        }
-        for (SeriesBranch b : net.boardNodeBranches()) {
-            if (b.inductanceH() == 0) {
-                gB += 1 / b.resistanceOhms();
-            } else {
-                aB += 1 / b.inductanceH();
-                bB -= b.resistanceOhms() / sq(b.inductanceH());
-            }
-        }
+        Expansion board = new Expansion();
+        board.addShunt(net.regulatorResistanceOhms(), net.regulatorInductanceH());
+        board.addBranches(net.boardNodeBranches());
         // a region behind its path R_r + sL_r: its node's expansion, then the path in series, as for the package
         for (breakwater.network.RegionPath r : net.spreadRegions()) {
-            double gR = 0;
-            double aR = 0;
-            double bR = 0;
-            for (SeriesBranch b : r.branches()) {
-                if (b.inductanceH() == 0) {
-                    gR += 1 / b.resistanceOhms();
-                } else {
-                    aR += 1 / b.inductanceH();
-                    bR -= b.resistanceOhms() / sq(b.inductanceH());
-                }
-            }
-            boolean regionFinite = gR > 0;
-            if (r.inductanceH() == 0 && regionFinite) {
-                gB += 1 / (r.resistanceOhms() + 1 / gR);
-            } else {
-                double lR = regionFinite ? 0 : 1 / aR;
-                double dR = regionFinite ? 1 / gR : -bR * lR * lR;
-                double lp = r.inductanceH() + lR;
-                double dp = r.resistanceOhms() + dR;
-                aB += 1 / lp;
-                bB -= dp / sq(lp);
-            }
+            Expansion node = new Expansion();
+            node.addBranches(r.branches());
+            board.addBehind(r.resistanceOhms(), r.inductanceH(), node);
         }
-        boolean boardFinite = gB > 0;
-        double zB = boardFinite ? 1 / gB : Double.NaN;
-        double lB = boardFinite ? 0 : 1 / aB;
-        double dB = boardFinite ? zB : -bB * lB * lB;
         if (!net.hasPackage()) {
-            return boardFinite ? new HighFrequencyLimit(zB, zB, 0)
-                    : new HighFrequencyLimit(Double.POSITIVE_INFINITY, dB, lB);
+            return board.finite() ? new HighFrequencyLimit(board.z(), board.z(), 0)
+                    : new HighFrequencyLimit(Double.POSITIVE_INFINITY, board.d(), board.l());
         }
-        double gL = 0;
-        double aL = 0;
-        double bL = 0;
-        if (net.packageInductanceH() == 0 && boardFinite) {
-            gL += 1 / (net.packageResistanceOhms() + zB);
-        } else {
-            double lp = net.packageInductanceH() + lB;
-            double dp = net.packageResistanceOhms() + dB;
-            aL += 1 / lp;
-            bL -= dp / sq(lp);
+        Expansion load = new Expansion();
+        load.addBehind(net.packageResistanceOhms(), net.packageInductanceH(), board);
+        load.addBranches(net.loadBranches());
+        if (load.finite()) {
+            return new HighFrequencyLimit(load.z(), load.z(), 0);
         }
-        for (SeriesBranch b : net.loadBranches()) {
-            if (b.inductanceH() == 0) {
-                gL += 1 / b.resistanceOhms();
+        return new HighFrequencyLimit(Double.POSITIVE_INFINITY, load.d(), load.l());
+    }
+
+    /**
+     * A node's admittance for large s, Y = g + a/s + b/s² + …: g from its inductance-free branches (may be
+     * +∞), a and b from the inductive ones (y = 1/(sL) − R/(s²L²) + …).
+     */
+    private static final class Expansion {
+        double g;
+        double a;
+        double b;
+
+        void addShunt(double r, double l) {
+            if (l == 0) {
+                g += 1 / r;
             } else {
-                aL += 1 / b.inductanceH();
-                bL -= b.resistanceOhms() / sq(b.inductanceH());
+                a += 1 / l;
+                b -= r / sq(l);
             }
         }
-        if (gL > 0) {
-            double d = 1 / gL;
-            return new HighFrequencyLimit(d, d, 0);
+
+        void addBranches(List<SeriesBranch> branches) {
+            for (SeriesBranch x : branches) {
+                addShunt(x.resistanceOhms(), x.inductanceH());
+            }
         }
-        double l = 1 / aL;
-        return new HighFrequencyLimit(Double.POSITIVE_INFINITY, -bL * l * l, l);
+
+        boolean finite() {
+            return g > 0;
+        }
+
+        /** Z(∞) of a finite node. */
+        double z() {
+            return 1 / g;
+        }
+
+        /** L∞: Z ≈ s·L∞ + D₀ for an inductive node, 0 for a finite one. */
+        double l() {
+            return finite() ? 0 : 1 / a;
+        }
+
+        /** D₀ of an inductive node (Z(∞) of a finite one). */
+        double d() {
+            return finite() ? 1 / g : -b * l() * l();
+        }
+
+        /** Adds {@code node} behind a series path R + sL. */
+        void addBehind(double r, double l, Expansion node) {
+            if (l == 0 && node.finite()) {
+                g += 1 / (r + node.z());
+            } else {
+                double lp = l + node.l();
+                double dp = r + node.d();
+                a += 1 / lp;
+                b -= dp / sq(lp);
+            }
+        }
     }
 
     private static double sq(double x) {

@@ -58,21 +58,11 @@ final class RailNetlist {
                 + "loop bandwidth (the loop itself is not modelled).");
         n.line(n.declare("Vreg") + " " + REGULATOR + " " + GROUND + " DC " + SpiceNetlist.number(nominalV));
         n.series("reg", REGULATOR, boardNode, network.regulatorResistanceOhms(), network.regulatorInductanceH(), 0);
-        int partNo = 0;
-        int otherNo = 0;
+        // numbers of the part branches (b1, b2, …) and of the other branches (s1, …) written so far
+        int[] numbers = new int[2];
         n.comment("Branches at the " + (network.hasPackage() ? "board node (" + BOARD + ")" : "board node, which is the "
                 + "load node here (no package)") + ":");
-        for (SeriesBranch b : network.boardBranches()) {
-            Optional<BankEntry> part = partOf(b, bank, footprint);
-            if (part.isPresent()) {
-                partNo++;
-                describePart(n, "b" + partNo, part.get(), footprint, footprintName);
-                shunt(n, "b" + partNo, boardNode, b);
-            } else {
-                otherNo++;
-                shunt(n, describeOther(n, b, "s" + otherNo), boardNode, b);
-            }
-        }
+        shunts(n, boardNode, network.boardBranches(), bank, footprint, footprintName, numbers);
         int regionNo = 0;
         for (breakwater.network.RegionPath r : network.regions()) {
             if (r.branches().isEmpty()) {
@@ -88,29 +78,38 @@ final class RailNetlist {
                         + " H, then its parts:");
                 n.series("path" + regionNo, boardNode, node, r.resistanceOhms(), r.inductanceH(), 0);
             }
-            for (SeriesBranch b : r.branches()) {
-                Optional<BankEntry> part = partOf(b, bank, footprint);
-                if (part.isPresent()) {
-                    partNo++;
-                    describePart(n, "b" + partNo, part.get(), footprint, footprintName);
-                    shunt(n, "b" + partNo, node, b);
-                } else {
-                    otherNo++;
-                    shunt(n, describeOther(n, b, "s" + otherNo), node, b);
-                }
-            }
+            shunts(n, node, r.branches(), bank, footprint, footprintName, numbers);
         }
         if (network.hasPackage()) {
             n.comment("Package path from the board node to the load node: R_pkg, L_pkg.");
             n.series("pkg", BOARD, LOAD, network.packageResistanceOhms(), network.packageInductanceH(), 0);
             n.comment("Branches at the load node (" + LOAD + "):");
             for (SeriesBranch b : network.loadBranches()) {
-                otherNo++;
-                shunt(n, describeOther(n, b, "s" + otherNo), LOAD, b);
+                numbers[1]++;
+                shunt(n, describeOther(n, b, "s" + numbers[1]), LOAD, b);
             }
         }
         n.line(".ends " + SUBCIRCUIT);
         return n.lines();
+    }
+
+    /**
+     * The branches at {@code node}, each described by a comment: a bank part's folded branch with its
+     * per-part values, or another branch (plane, die) by what it is; {@code numbers} counts both kinds.
+     */
+    private static void shunts(SpiceNetlist n, String node, List<SeriesBranch> branches, List<BankEntry> bank,
+                               Optional<Footprint> footprint, String footprintName, int[] numbers) {
+        for (SeriesBranch b : branches) {
+            Optional<BankEntry> part = partOf(b, bank, footprint);
+            if (part.isPresent()) {
+                numbers[0]++;
+                describePart(n, "b" + numbers[0], part.get(), footprint, footprintName);
+                shunt(n, "b" + numbers[0], node, b);
+            } else {
+                numbers[1]++;
+                shunt(n, describeOther(n, b, "s" + numbers[1]), node, b);
+            }
+        }
     }
 
     /** A shunt branch R + sL + 1/(sC) from {@code node} to ground, zero-valued R or L left out. */

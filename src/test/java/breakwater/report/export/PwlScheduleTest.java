@@ -41,13 +41,29 @@ class PwlScheduleTest {
     }
 
     @Test
-    void separationStaysBelowTheGapsBetweenBreakpoints() {
-        // breakpoints closer than the default separation: δ shrinks to keep the order
-        double[] t = {0, 1e-15, 1e-15, 2e-15};
-        PwlSchedule s = PwlSchedule.of(t, new double[] {0, 0, 1, 1}, 1e-9);
-        assertThat(s.separationS()).isLessThanOrEqualTo(0.25e-15);
-        assertThat(s.timesS()[2]).isGreaterThan(s.timesS()[1]).isLessThan(s.timesS()[3]);
-        assertThat(s.timesS()[1]).isGreaterThan(s.timesS()[0]);
+    void breakpointsCloserThanTheSeparationAreOneInstantSoNoStepIsTiny() {
+        // a rounding apart (1e-21 s) and 1e-15 s apart with a 1 ns fastest period (δ₀ = 1e-13 s): one instant,
+        // spread by δ₀ in their order; a simulator would otherwise have to step by 1e-21 s
+        double[] t = {0, 5e-9, 5e-9 + 1e-21, 5e-9 + 1e-15, 8e-9};
+        PwlSchedule s = PwlSchedule.of(t, new double[] {0, 0, 1, 1, 1}, 1e-9);
+        assertThat(s.separationS()).isCloseTo(1e-13, org.assertj.core.api.Assertions.within(1e-25));
+        for (int i = 1; i < s.size(); i++) {
+            assertThat(s.time(i) - s.time(i - 1)).isGreaterThanOrEqualTo(0.999e-13);
+        }
+        assertThat(s.time(2)).isCloseTo(5e-9, org.assertj.core.api.Assertions.within(1e-15));
+        assertThat(s.valuesA()).containsExactly(0, 0, 1, 1, 1);
+        assertThat(s.jumps()).isEqualTo(1);
+    }
+
+    @Test
+    void separationStaysBelowTheGapsBetweenInstants() {
+        // instants 3e-13 apart (above δ₀ = 1e-13 s), each a jump: δ shrinks to keep the order
+        double[] t = {0, 3e-13, 3e-13, 6e-13, 6e-13};
+        PwlSchedule s = PwlSchedule.of(t, new double[] {0, 0, 1, 1, 0}, 1e-9);
+        assertThat(s.separationS()).isLessThanOrEqualTo(0.75e-13);
+        for (int i = 1; i < s.size(); i++) {
+            assertThat(s.time(i)).isGreaterThan(s.time(i - 1));
+        }
     }
 
     @Test
