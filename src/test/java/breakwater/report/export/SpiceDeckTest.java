@@ -223,6 +223,7 @@ class SpiceDeckTest {
             Pattern.compile("X[A-Za-z0-9_]* load 0 rail"),
             Pattern.compile("\\.subckt rail load gnd"),
             Pattern.compile("\\.ends rail"),
+            Pattern.compile("\\.options method=gear maxord=2"),                       // SPICE3 integration method
             Pattern.compile("\\.tran " + num() + " " + num() + " 0 " + num()),
             Pattern.compile("\\.ac dec [0-9]+ " + num() + " " + num()),
             Pattern.compile("\\.save v\\(load\\)"),
