@@ -87,7 +87,7 @@ public final class CompareReport {
                 + "is that of " + r.primary().name() + ". Costs in "
                 + (currency.isEmpty() ? "the catalog's currency" : currency) + ".";
         return new ReportModel.Section("Footprints compared", List.of(intro),
-                List.of(new ReportModel.Table("Side by side", HEADERS, table)), List.of());
+                List.of(new ReportModel.Table("Side by side", HEADERS, table)), List.of()).asLead();
     }
 
     static void summary(ObjectNode json, CompareResult r) {

@@ -121,7 +121,7 @@ public final class FrontierReport {
                 format(f.tightestV(), VOLTAGE), format(f.allowedV(), VOLTAGE), Texts.duration(r.each().timeLimit()),
                 Texts.duration(r.all().timeLimit()), pts.size() + 1) + (asymmetric.isEmpty() ? "" : " Note: " + asymmetric + ".");
         return new ReportModel.Section("Cost against worst excursion", List.of(intro),
-                List.of(new ReportModel.Table("Frontier, tightest limit first", HEADERS, rows)), List.of(chart));
+                List.of(new ReportModel.Table("Frontier, tightest limit first", HEADERS, rows)), List.of(chart)).asLead();
     }
 
     static void summary(ObjectNode json, FrontierResult r) {
