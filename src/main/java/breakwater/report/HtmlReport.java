@@ -210,10 +210,8 @@ public final class HtmlReport {
 
     /** Money with at least two decimals and up to four (unit costs of small parts), locale-independent. */
     static String money(double v) {
-        BigDecimal d = BigDecimal.valueOf(v).setScale(4, RoundingMode.HALF_EVEN).stripTrailingZeros();
-        if (d.scale() < 2) {
-            d = d.setScale(2, RoundingMode.UNNECESSARY);
-        }
+        // four decimals, as the console prints money: 0.0400, 1.6230
+        BigDecimal d = BigDecimal.valueOf(v).setScale(4, RoundingMode.HALF_EVEN);
         String s = d.toPlainString();
         return s.startsWith("-") ? "&#8722;" + s.substring(1) : s;
     }

@@ -10,7 +10,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import static breakwater.units.EngineeringNotation.format;
+import static breakwater.report.Figures.format;
 import static breakwater.units.Quantity.FRACTION;
 import static breakwater.units.Quantity.VOLTAGE;
 

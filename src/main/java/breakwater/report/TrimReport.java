@@ -16,7 +16,7 @@ import java.util.Optional;
 import java.util.function.UnaryOperator;
 
 import static breakwater.report.Texts.money;
-import static breakwater.units.EngineeringNotation.format;
+import static breakwater.report.Figures.format;
 import static breakwater.units.Quantity.RESISTANCE;
 import static breakwater.units.Quantity.VOLTAGE;
 

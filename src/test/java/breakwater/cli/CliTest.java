@@ -94,8 +94,8 @@ class CliTest {
                 out.toString(), "--quiet");
         assertThat(r.code()).isEqualTo(ExitCodes.SPEC_NOT_MET);
         String html = Files.readString(out.resolve("report.html"));
-        assertThat(html).contains("<div class=\"bad\"><dt>V_min (limit 0.873 V)</dt>")
-                .contains("<div class=\"good\"><dt>V_max (limit 0.927 V)</dt>");
+        assertThat(html).contains("<div class=\"bad\"><dt>V_min (limit 0.8730 V)</dt>")
+                .contains("<div class=\"good\"><dt>V_max (limit 0.9270 V)</dt>");
         // after --monte-carlo: a yield card (red, under 95 %) and the failing samples shaded in the histograms
         assertThat(html).containsPattern("<div class=\"bad\"><dt>Yield \\(Monte Carlo\\)</dt><dd>[0-9.]+ % \\([0-9]+ of 40 samples\\)");
         assertThat(html).contains("beyond the allowance: failing samples");
