@@ -84,7 +84,7 @@ public final class CompareReport {
                 : String.format(Locale.ROOT, "For each footprint, the cheapest bank the search found under its "
                         + "mounting inductances (%s of the %s time limit each, seed %d).",
                 Texts.duration(r.each().timeLimit()), Texts.duration(r.all().timeLimit()), r.each().seed()))
-                + " The charts above overlay every footprint's |Z| and worst-case droop; the bill of materials "
+                + " The charts below overlay every footprint's |Z| and worst-case droop; the bill of materials "
                 + "is that of " + r.primary().name() + ". Costs in "
                 + (currency.isEmpty() ? "the catalog's currency" : currency) + ".";
         return new ReportModel.Section("Footprints compared", List.of(intro),
