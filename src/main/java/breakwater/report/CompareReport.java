@@ -13,7 +13,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import static breakwater.units.EngineeringNotation.format;
+import static breakwater.report.Figures.format;
 import static breakwater.units.Quantity.RESISTANCE;
 import static breakwater.units.Quantity.VOLTAGE;
 
@@ -25,7 +25,6 @@ import static breakwater.units.Quantity.VOLTAGE;
 public final class CompareReport {
     static final List<String> HEADERS = List.of("footprint", "cost", "parts", "worst droop", "worst overshoot",
             "margin", "flatness", "peak |Z|", "verdict");
-    private static final String ROW = "  %-16s %10s %6s %12s %12s %11s %9s %10s  %s%n";
 
     private CompareReport() {
     }
@@ -56,7 +55,7 @@ public final class CompareReport {
             table.add(List.of(row.name(), Texts.money(e.cost().total()), Integer.toString(e.bank().totalParts()),
                     format(e.figures().droopV(), VOLTAGE), format(e.figures().overshootV(), VOLTAGE),
                     format(e.figures().marginV(), VOLTAGE), String.format(Locale.ROOT, "%.2f dB", e.impedance().flatnessDb()),
-                    format(e.impedance().peakOhms(), RESISTANCE), row.meets() ? "meets spec" : "FAILS"));
+                    format(e.impedance().peakOhms(), RESISTANCE), row.meets() ? "MEETS SPEC" : "FAILS SPEC"));
         }
         return table;
     }
@@ -68,10 +67,12 @@ public final class CompareReport {
                         + "limit was split, %s per footprint%s%n", Texts.duration(r.all().timeLimit()),
                 Texts.duration(r.each().timeLimit()),
                 r.interrupted() ? " (stopped by the user: later footprints not searched)" : ""));
-        c.append(String.format(Locale.ROOT, ROW, HEADERS.toArray()));
-        for (List<String> row : table) {
-            c.append(String.format(Locale.ROOT, ROW, row.toArray()));
-        }
+        List<String> headers = new ArrayList<>(HEADERS);
+        String currency = r.primary().judge().scenario().cost().currency();
+        headers.set(1, currency.isEmpty() ? "cost" : "cost (" + currency + ")");
+        ConsoleTable t = new ConsoleTable(headers, false, true, true, true, true, true, true, true, false);
+        table.forEach(t::row);
+        c.append(t.render());
         c.append(String.format(Locale.ROOT, "%-10s the bank above and the files describe footprint %s%s%n", "Shown",
                 r.primary().name(), r.primary().meets() ? " (the cheapest that meets the spec)" : " (none meets the spec)"));
         return c.toString();
@@ -83,11 +84,11 @@ public final class CompareReport {
                 : String.format(Locale.ROOT, "For each footprint, the cheapest bank the search found under its "
                         + "mounting inductances (%s of the %s time limit each, seed %d).",
                 Texts.duration(r.each().timeLimit()), Texts.duration(r.all().timeLimit()), r.each().seed()))
-                + " The charts above overlay every footprint's |Z| and worst-case droop; the bill of materials "
+                + " The charts below overlay every footprint's |Z| and worst-case droop; the bill of materials "
                 + "is that of " + r.primary().name() + ". Costs in "
                 + (currency.isEmpty() ? "the catalog's currency" : currency) + ".";
         return new ReportModel.Section("Footprints compared", List.of(intro),
-                List.of(new ReportModel.Table("Side by side", HEADERS, table)), List.of());
+                List.of(new ReportModel.Table("Side by side", HEADERS, table)), List.of()).asLead();
     }
 
     static void summary(ObjectNode json, CompareResult r) {

@@ -12,7 +12,7 @@ import breakwater.timedomain.DroopByAge;
 import java.util.List;
 import java.util.Locale;
 
-import static breakwater.units.EngineeringNotation.format;
+import static breakwater.report.Figures.format;
 import static breakwater.units.Quantity.CURRENT;
 import static breakwater.units.Quantity.FREQUENCY;
 import static breakwater.units.Quantity.FRACTION;
@@ -43,18 +43,19 @@ public final class ConsoleReport {
             line(b, "Footprint", footprintName);
         }
         b.append('\n');
+        String cur = currency.isEmpty() ? "" : " (" + currency + ")";
         boolean placed = e.bank().isPlaced();
-        b.append(String.format(Locale.ROOT, "  %-24s %-6s %6s %10s %12s%s%n", "part", "case", "count", "unit", "extended",
-                placed ? "  region" : ""));
+        b.append(String.format(Locale.ROOT, "  %-24s %-6s %6s %12s %16s%s%n", "part", "case", "count", "unit" + cur,
+                "extended" + cur, placed ? "  region" : ""));
         for (BankEntry be : e.bank().entries()) {
-            b.append(String.format(Locale.ROOT, "  %-24s %-6s %6d %10s %12s%s%n", be.part().name(), be.part().caseCode(),
+            b.append(String.format(Locale.ROOT, "  %-24s %-6s %6d %12s %16s%s%n", be.part().name(), be.part().caseCode(),
                     be.count(), money(be.part().unitCost()), money(be.part().unitCost() * be.count()),
                     placed ? "  " + be.region() : ""));
         }
         if (e.bank().entries().isEmpty()) {
             b.append("  (empty bank)\n");
         }
-        b.append(String.format(Locale.ROOT, "  %-24s %-6s %6d %10s %12s%n", "total", "", e.bank().totalParts(), "",
+        b.append(String.format(Locale.ROOT, "  %-24s %-6s %6d %12s %16s%n", "total", "", e.bank().totalParts(), "",
                 money(e.cost().total())));
         line(b, "Cost", money(e.cost().total()) + (currency.isEmpty() ? "" : " " + currency) + " per board (parts "
                 + money(e.cost().partsCost()) + ", placement " + money(e.cost().placementCost()) + ", line items "
@@ -103,8 +104,8 @@ public final class ConsoleReport {
                         rings ? format(dI * rr.squareAmplitudeOhms(), VOLTAGE) : "-",
                         rr.cyclesTo95Percent() > 0 ? Integer.toString(rr.cyclesTo95Percent()) : "-"));
             }
-            b.append("  (square: a 50 % square wave at the resonance; cycles to 95 %: cycles of resonant drive until "
-                    + "the sine response reaches 95 % of its steady state; - where no mode rings)\n");
+            b.append(Texts.wrap("  (square: a 50 % square wave at the resonance; cycles to 95 %: cycles of resonant drive "
+                    + "until the sine response reaches 95 % of its steady state; - where no mode rings)", "   "));
         }
         return b.toString();
     }
@@ -157,16 +158,21 @@ public final class ConsoleReport {
                 + " relative: reached by a load pattern, at most that fraction below the model's true worst case";
     }
 
-    /** Volts with 4 significant digits, always in V (engineers write 0.9 V, not 900 mV, for a rail). */
+    /** Volts with 4 significant digits (trailing zeros kept), always in V (engineers write 0.9 V, not 900 mV, for a rail). */
     public static String volts(double v) {
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(4)).stripTrailingZeros().toPlainString() + " V";
+        // four significant digits kept, trailing zeros included, so limits and V_min/V_max read alike
+        java.math.BigDecimal d = new java.math.BigDecimal(v).round(new java.math.MathContext(4));
+        int integerDigits = d.signum() == 0 ? 1 : d.precision() - d.scale();
+        return d.setScale(Math.max(d.scale(), 4 - Math.max(integerDigits, 0)),
+                java.math.RoundingMode.HALF_EVEN).toPlainString() + " V";
     }
 
     static String money(double v) {
         return String.format(Locale.ROOT, "%.4f", v);
     }
 
+    /** A labelled line, wrapped to the console's width under its text column. */
     private static void line(StringBuilder b, String head, String text) {
-        b.append(String.format(Locale.ROOT, "%-10s %s%n", head, text));
+        b.append(Texts.wrap(String.format(Locale.ROOT, "%-10s %s", head, text), " ".repeat(11)));
     }
 }

@@ -16,7 +16,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 
-import static breakwater.units.EngineeringNotation.format;
+import static breakwater.report.Figures.format;
 import static breakwater.units.Quantity.VOLTAGE;
 
 /**
@@ -27,7 +27,6 @@ import static breakwater.units.Quantity.VOLTAGE;
 public final class FrontierReport {
     static final List<String> HEADERS = List.of("limit", "cost", "parts", "worst droop", "worst overshoot", "meets",
             "vs. the spec's bank", "note");
-    private static final String ROW = "  %-10s %10s %6s %12s %15s %6s  %-28s%n";
 
     private FrontierReport() {
     }
@@ -53,7 +52,7 @@ public final class FrontierReport {
             String vs = p == specPoint ? "-" : String.format(Locale.ROOT, "%+.4f for %s less", dc, format(dx, VOLTAGE));
             rows.add(List.of(format(p.limitV(), VOLTAGE), Texts.money(p.costTotal()),
                     Integer.toString(p.bank().totalParts()), format(p.evaluation().figures().droopV(), VOLTAGE),
-                    format(p.evaluation().figures().overshootV(), VOLTAGE), p.meetsLimit() ? "yes" : "NO", vs, p.note()));
+                    format(p.evaluation().figures().overshootV(), VOLTAGE), p.meetsLimit() ? "YES" : "NO", vs, p.note()));
         }
         return rows;
     }
@@ -73,21 +72,27 @@ public final class FrontierReport {
         ExcursionFrontier.Result f = r.frontier();
         int n = f.points().size();
         StringBuilder c = new StringBuilder();
-        c.append(String.format(Locale.ROOT, "Frontier   smallest worst excursion found %s, spec allows %s: %d limits "
+        c.append(Texts.wrapLines(String.format(Locale.ROOT, "Frontier   smallest worst excursion found %s, spec allows %s: %d limits "
                         + "from one to the other; the %s time limit was split over %d searches, %s each%s%n",
                 format(f.tightestV(), VOLTAGE), format(f.allowedV(), VOLTAGE), n, Texts.duration(r.all().timeLimit()),
-                n + 1, Texts.duration(r.each().timeLimit()), r.interrupted() ? " (stopped by the user)" : ""));
+                n + 1, Texts.duration(r.each().timeLimit()), r.interrupted() ? " (stopped by the user)" : ""), "           "));
         if (!asymmetric.isEmpty()) {
-            c.append(String.format(Locale.ROOT, "%-10s %s%n", "", asymmetric));
+            c.append(Texts.wrap(String.format(Locale.ROOT, "%-10s %s", "", asymmetric), "           "));
         }
-        c.append(String.format(Locale.ROOT, ROW, "limit", "cost", "parts", "worst droop", "worst overshoot", "meets",
-                "vs. the spec's bank"));
+        String currency = r.judge().scenario().cost().currency();
+        ConsoleTable t = new ConsoleTable(List.of("limit", currency.isEmpty() ? "cost" : "cost (" + currency + ")",
+                "parts", "worst droop", "worst overshoot", "meets limit", "vs. the spec's bank"),
+                true, true, true, true, true, false, false);
+        List<String> notes = new ArrayList<>();
         for (List<String> row : rows) {
-            c.append(String.format(Locale.ROOT, ROW, row.get(0), row.get(1), row.get(2), row.get(3), row.get(4),
-                    row.get(5), row.get(6)));
+            t.row(row.subList(0, 7));
             if (!row.get(7).isEmpty()) {
-                c.append("             note: ").append(row.get(7)).append('\n');
+                notes.add(row.get(0) + ": " + row.get(7));
             }
+        }
+        c.append(t.render());
+        for (String note : notes) {
+            c.append(Texts.wrap("  note, limit " + note, "    "));
         }
         c.append(String.format(Locale.ROOT, "%-10s the bank above and the files are the spec limit's bank%n", "Shown"));
         return c.toString();
@@ -121,7 +126,7 @@ public final class FrontierReport {
                 format(f.tightestV(), VOLTAGE), format(f.allowedV(), VOLTAGE), Texts.duration(r.each().timeLimit()),
                 Texts.duration(r.all().timeLimit()), pts.size() + 1) + (asymmetric.isEmpty() ? "" : " Note: " + asymmetric + ".");
         return new ReportModel.Section("Cost against worst excursion", List.of(intro),
-                List.of(new ReportModel.Table("Frontier, tightest limit first", HEADERS, rows)), List.of(chart));
+                List.of(new ReportModel.Table("Frontier, tightest limit first", HEADERS, rows)), List.of(chart)).asLead();
     }
 
     static void summary(ObjectNode json, FrontierResult r) {

@@ -59,7 +59,9 @@ public final class HtmlReport {
             caption { text-align: left; color: var(--muted); font-size: 12px; padding-bottom: 4px; }
             th, td { padding: 4px 10px; border-bottom: 1px solid var(--rule); text-align: left; vertical-align: top; }
             th { background: #f3f3f5; font-weight: 600; border-bottom: 1px solid #b8b8be; }
-            td.num, th.num { text-align: right; white-space: nowrap; }
+            td.num { text-align: right; white-space: nowrap; }
+            th.num { text-align: right; }
+            .wide { overflow-x: auto; max-width: 100%; }
             tr.total td { font-weight: 600; border-top: 1.5px solid #888; border-bottom: none; }
             .note { color: var(--muted); font-size: 12px; }
             .cautions { margin-top: 28px; padding: 10px 16px; border: 2px solid #c98a00; background: #fff8e5;
@@ -108,6 +110,14 @@ public final class HtmlReport {
             b.append("</dl>\n</section>\n");
         }
 
+        // the section the mode exists for (trim's changes, compare's table, the frontier) comes first
+        int lead = 0;
+        for (Section s : m.sections()) {
+            if (s.lead()) {
+                section(b, s, "lead-" + ++lead);
+            }
+        }
+
         var z = m.impedance();
         EngineeringFormat hz = EngineeringFormat.perValue("Hz");
         b.append("<section id=\"impedance\">\n<h2>Impedance at the load</h2>\n<figure>\n")
@@ -136,17 +146,9 @@ public final class HtmlReport {
 
         int n = 0;
         for (Section s : m.sections()) {
-            b.append("<section id=\"extra-").append(++n).append("\">\n<h2>").append(esc(s.heading())).append("</h2>\n");
-            for (String p : s.paragraphs()) {
-                b.append("<p>").append(esc(p)).append("</p>\n");
+            if (!s.lead()) {
+                section(b, s, ++n);
             }
-            for (Table t : s.tables()) {
-                table(b, t);
-            }
-            for (String svg : s.chartsSvg()) {
-                b.append("<figure>\n").append(SvgWriter.stripProlog(svg)).append("\n</figure>\n");
-            }
-            b.append("</section>\n");
         }
 
         b.append("<section id=\"settings\">\n<h2>Run settings</h2>\n");
@@ -223,17 +225,34 @@ public final class HtmlReport {
 
     /** Money with at least two decimals and up to four (unit costs of small parts), locale-independent. */
     static String money(double v) {
-        BigDecimal d = BigDecimal.valueOf(v).setScale(4, RoundingMode.HALF_EVEN).stripTrailingZeros();
-        if (d.scale() < 2) {
-            d = d.setScale(2, RoundingMode.UNNECESSARY);
-        }
+        // four decimals, as the console prints money: 0.0400, 1.6230
+        BigDecimal d = BigDecimal.valueOf(v).setScale(4, RoundingMode.HALF_EVEN);
         String s = d.toPlainString();
         return s.startsWith("-") ? "&#8722;" + s.substring(1) : s;
     }
 
+    private static void section(StringBuilder b, Section s, int n) {
+        section(b, s, "extra-" + n);
+    }
+
+    private static void section(StringBuilder b, Section s, String id) {
+        b.append("<section id=\"").append(id).append("\">\n<h2>").append(esc(s.heading())).append("</h2>\n");
+        for (String p : s.paragraphs()) {
+            b.append("<p>").append(esc(p)).append("</p>\n");
+        }
+        for (Table t : s.tables()) {
+            table(b, t);
+        }
+        for (String svg : s.chartsSvg()) {
+            b.append("<figure>\n").append(SvgWriter.stripProlog(svg)).append("\n</figure>\n");
+        }
+        b.append("</section>\n");
+    }
+
     private static void table(StringBuilder b, Table t) {
         boolean[] numeric = numericColumns(t);
-        b.append("<table>\n");
+        // a table wider than a narrow window scrolls on its own instead of running off the page
+        b.append("<div class=\"wide\"><table>\n");
         if (!t.caption().isEmpty()) {
             b.append("<caption>").append(esc(t.caption())).append("</caption>\n");
         }
@@ -249,7 +268,7 @@ public final class HtmlReport {
             }
             b.append("</tr>\n");
         }
-        b.append("</tbody>\n</table>\n");
+        b.append("</tbody>\n</table></div>\n");
     }
 
     /** A column is numeric when every non-empty body cell looks like a number, possibly with a unit. */

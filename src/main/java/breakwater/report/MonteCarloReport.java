@@ -10,7 +10,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import static breakwater.units.EngineeringNotation.format;
+import static breakwater.report.Figures.format;
 import static breakwater.units.Quantity.FRACTION;
 import static breakwater.units.Quantity.VOLTAGE;
 
@@ -21,8 +21,17 @@ public final class MonteCarloReport {
 
     /** The run's console text, summary keys and report section together; nothing when there was no run. */
     static ModeOutput output(java.util.Optional<MonteCarlo.Result> run) {
-        return run.map(r -> new ModeOutput(console(r), json -> summary(json, r), List.of(section(r))))
+        return run.map(r -> new ModeOutput(console(r), json -> summary(json, r), List.of(section(r)),
+                        m -> Overlays.withKeyFigure(m, yieldCard(r))))
                 .orElse(ModeOutput.NONE);
+    }
+
+    /** The yield as a key figure: red under the 95 % that the verdict's caution uses ({@code Verdict}). */
+    static ReportModel.KeyFigure yieldCard(MonteCarlo.Result r) {
+        long inside = Math.round(r.yieldFraction() * r.settings().samples());
+        return new ReportModel.KeyFigure("Yield (Monte Carlo)", String.format(Locale.ROOT, "%.1f %% (%d of %d samples)",
+                100 * r.yieldFraction(), inside, r.settings().samples()),
+                r.yieldFraction() >= breakwater.design.Verdict.YIELD_CAUTION ? ReportModel.Tone.GOOD : ReportModel.Tone.BAD);
     }
 
     /** Bins of the histograms: about √N, between 10 and 60. */
@@ -91,10 +100,10 @@ public final class MonteCarloReport {
         ReportModel.Table parts = new ReportModel.Table("How each part type was varied",
                 List.of("part", "count", "capacitance", "tolerance from", "ESR and ESL"), partRows);
         String droopChart = HistogramChart.svg(new Histogram("worst droop", "V", r.droopV(), bins(s.samples()),
-                List.of(new Limit("allowed droop " + format(allowedDroop, VOLTAGE), allowedDroop))));
+                List.of(new Limit("allowed droop " + format(allowedDroop, VOLTAGE), allowedDroop)), allowedDroop));
         String overChart = HistogramChart.svg(new Histogram("worst overshoot", "V", r.overshootV(),
                 bins(s.samples()), List.of(new Limit("allowed overshoot " + format(allowedOver, VOLTAGE),
-                allowedOver))));
+                allowedOver)), allowedOver));
         String text = String.format(Locale.ROOT, "%d Monte Carlo samples were judged (seed %d, %.1f s). In each sample, every part type's "
                         + "capacitance is drawn uniformly within its tolerance and its ESR and ESL within ±%s; all "
                         + "parts of one type move together, as a batch from one reel would (the pessimistic "

@@ -20,7 +20,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 
-import static breakwater.units.EngineeringNotation.format;
+import static breakwater.report.Figures.format;
 import static breakwater.units.Quantity.CURRENT;
 import static breakwater.units.Quantity.FREQUENCY;
 import static breakwater.units.Quantity.FRACTION;
@@ -75,8 +75,13 @@ public final class ReportBuilder {
                 wc.droopExcessV() > 0 ? ReportModel.Tone.BAD : ReportModel.Tone.GOOD));
         keys.add(new ReportModel.KeyFigure("Worst overshoot", format(wc.overshootV(), VOLTAGE),
                 wc.overshootExcessV() > 0 ? ReportModel.Tone.BAD : ReportModel.Tone.GOOD));
-        keys.add(new ReportModel.KeyFigure("V_min / V_max", ConsoleReport.volts(wc.minVoltageV()) + " / "
-                + ConsoleReport.volts(wc.maxVoltageV()), wcTone));
+        // each limit's card turns red only when that limit fails
+        keys.add(new ReportModel.KeyFigure("V_min (limit " + ConsoleReport.volts(wc.lowerLimitV()) + ")",
+                ConsoleReport.volts(wc.minVoltageV()),
+                wc.droopExcessV() > 0 ? ReportModel.Tone.BAD : ReportModel.Tone.GOOD));
+        keys.add(new ReportModel.KeyFigure("V_max (limit " + ConsoleReport.volts(wc.upperLimitV()) + ")",
+                ConsoleReport.volts(wc.maxVoltageV()),
+                wc.overshootExcessV() > 0 ? ReportModel.Tone.BAD : ReportModel.Tone.GOOD));
         keys.add(new ReportModel.KeyFigure("Margin to the limits", format(wc.marginV(), VOLTAGE), wcTone));
         keys.add(new ReportModel.KeyFigure("Worst-case ratio", String.format(Locale.ROOT, "%.2f × ΔI·Z_t", wc.worstCaseRatio())));
         keys.add(new ReportModel.KeyFigure("Peak |Z|", format(m.peakOhms(), RESISTANCE) + " at "

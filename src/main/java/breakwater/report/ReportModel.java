@@ -146,7 +146,8 @@ public record ReportModel(
      * {@link breakwater.report.chart.HistogramChart}). Lists may be empty; that is how a section says
      * "no table" or "no chart".
      */
-    public record Section(String heading, List<String> paragraphs, List<Table> tables, List<String> chartsSvg) {
+    public record Section(String heading, List<String> paragraphs, List<Table> tables, List<String> chartsSvg,
+                          boolean lead) {
         public Section {
             requireText(heading, "section heading");
             paragraphs = List.copyOf(paragraphs);
@@ -157,16 +158,26 @@ public record ReportModel(
             }
         }
 
+        /** A section shown after the single bank's details. */
+        public Section(String heading, List<String> paragraphs, List<Table> tables, List<String> chartsSvg) {
+            this(heading, paragraphs, tables, chartsSvg, false);
+        }
+
+        /** The same section shown first, right after the key figures: the one a mode exists for. */
+        public Section asLead() {
+            return new Section(heading, paragraphs, tables, chartsSvg, true);
+        }
+
         public static Section text(String heading, String paragraph) {
             return new Section(heading, List.of(paragraph), List.of(), List.of());
         }
 
         public Section withTable(Table table) {
-            return new Section(heading, paragraphs, append(tables, table), chartsSvg);
+            return new Section(heading, paragraphs, append(tables, table), chartsSvg, lead);
         }
 
         public Section withChart(String svg) {
-            return new Section(heading, paragraphs, tables, append(chartsSvg, svg));
+            return new Section(heading, paragraphs, tables, append(chartsSvg, svg), lead);
         }
 
         private static <T> List<T> append(List<T> list, T item) {

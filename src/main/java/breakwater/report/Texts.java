@@ -6,7 +6,7 @@ import breakwater.optimize.CostDown;
 import java.time.Duration;
 import java.util.Locale;
 
-import static breakwater.units.EngineeringNotation.format;
+import static breakwater.report.Figures.format;
 import static breakwater.units.Quantity.VOLTAGE;
 
 /** Small text helpers shared by the reporters. */
@@ -45,6 +45,55 @@ final class Texts {
         }
         return existing.passes() ? "the spec"
                 : "the spec (the existing bank itself misses it, so it has no margin to keep)";
+    }
+
+    /** The console's width: the COLUMNS environment variable when it holds a sensible number, else 100. */
+    static int width() {
+        String c = System.getenv("COLUMNS");
+        try {
+            int w = c == null ? 100 : Integer.parseInt(c.strip());
+            return w >= 40 && w <= 1000 ? w : 100;
+        } catch (NumberFormatException e) {
+            return 100;
+        }
+    }
+
+    /**
+     * {@code text} (its own indentation kept on the first line) wrapped at spaces to the console's
+     * width, later lines starting with {@code indent}; ends with a newline.
+     */
+    static String wrap(String text, String indent) {
+        return wrap(text, indent, width());
+    }
+
+    /** Each line of {@code text} (newline-separated) wrapped as {@link #wrap(String, String)}. */
+    static String wrapLines(String text, String indent) {
+        StringBuilder b = new StringBuilder();
+        for (String l : text.split("\n")) {
+            b.append(wrap(l, indent));
+        }
+        return b.toString();
+    }
+
+    static String wrap(String text, String indent, int width) {
+        StringBuilder out = new StringBuilder();
+        String rest = text;
+        int floor = indent.length() + 1; // never break inside the head or the indentation
+        while (rest.length() > width) {
+            int cut = rest.lastIndexOf(' ', width);
+            while (cut > floor && rest.charAt(cut - 1) == ' ') {
+                cut--;
+            }
+            if (cut <= floor) {
+                cut = rest.indexOf(' ', width); // one long word: break after it
+                if (cut < 0) {
+                    break;
+                }
+            }
+            out.append(rest, 0, cut).append('\n');
+            rest = indent + rest.substring(cut).stripLeading();
+        }
+        return out.append(rest).append('\n').toString();
     }
 
     /** "" for one, "s" for any other count. */

@@ -16,7 +16,7 @@ import java.util.Optional;
 import java.util.function.UnaryOperator;
 
 import static breakwater.report.Texts.money;
-import static breakwater.units.EngineeringNotation.format;
+import static breakwater.report.Figures.format;
 import static breakwater.units.Quantity.RESISTANCE;
 import static breakwater.units.Quantity.VOLTAGE;
 
@@ -105,13 +105,13 @@ public final class TrimReport {
         String intro = r.unchanged()
                 ? "Keeping " + keeping(r) + ", the existing bank is returned unchanged: " + r.reason() + "."
                 : String.format(Locale.ROOT, "Keeping %s, the trimmed bank saves %s%s per board (%.2f%s per 1,000 "
-                        + "boards). The charts above overlay the trimmed bank (first) and the existing one.",
+                        + "boards). The charts below overlay the trimmed bank (first) and the existing one.",
                 keeping(r), money(savings), cur, 1000 * savings, cur);
         return new ReportModel.Section("Cost-down of the existing bank", List.of(intro),
                 List.of(new ReportModel.Table("Part counts changed", List.of("part", "existing", "trimmed", "change"),
                                 changeRows),
                         new ReportModel.Table("Existing against trimmed", List.of("figure", "existing", "trimmed"), cmp)),
-                List.of());
+                List.of()).asLead();
     }
 
     /** Both banks' |Z| and worst-case droop on the main charts (unless unchanged), and the savings as a key figure. */

@@ -8,7 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 
-import static breakwater.units.EngineeringNotation.format;
+import static breakwater.report.Figures.format;
 import static breakwater.units.Quantity.FREQUENCY;
 import static breakwater.units.Quantity.RESISTANCE;
 import static breakwater.units.Quantity.VOLTAGE;

@@ -87,6 +87,21 @@ class CliTest {
     }
 
     @Test
+    void theReportTurnsOnlyTheFailingLimitRedAndShowsTheYield(@TempDir Path dir) throws IOException {
+        // the demo bank sags 2.25 mV below the lower limit and stays 2.3 mV under the upper one
+        Path out = dir.resolve("r");
+        Run r = run("check", DEMO.toString(), "--bank", DEMO_BANK.toString(), "--monte-carlo", "40", "--out",
+                out.toString(), "--quiet");
+        assertThat(r.code()).isEqualTo(ExitCodes.SPEC_NOT_MET);
+        String html = Files.readString(out.resolve("report.html"));
+        assertThat(html).contains("<div class=\"bad\"><dt>V_min (limit 0.8730 V)</dt>")
+                .contains("<div class=\"good\"><dt>V_max (limit 0.9270 V)</dt>");
+        // after --monte-carlo: a yield card (red, under 95 %) and the failing samples shaded in the histograms
+        assertThat(html).containsPattern("<div class=\"bad\"><dt>Yield \\(Monte Carlo\\)</dt><dd>[0-9.]+ % \\([0-9]+ of 40 samples\\)");
+        assertThat(html).contains("beyond the allowance: failing samples");
+    }
+
+    @Test
     void missingScenarioFileIsAnIoError() {
         Run r = run("check", "no/such/scenario.toml", "--bank", DEMO_BANK.toString());
         assertThat(r.code()).isEqualTo(ExitCodes.IO_ERROR);

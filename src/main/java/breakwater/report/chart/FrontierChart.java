@@ -88,10 +88,13 @@ public final class FrontierChart {
         }
         for (LabelledPoint p : f.highlighted()) {
             // below and left of a frontier point lies the region no candidate reaches: room for text
-            XYTextAnnotation a = new XYTextAnnotation(p.label() + "    ", p.x(), p.y());
+            // (near the left edge the text goes right of the point instead, so it is not cut off)
+            boolean nearLeft = p.x() < xLo - xPad + 0.25 * (xHi - xLo + 2 * xPad);
+            double shift = nearLeft ? 0.02 * (xHi - xLo + 2 * xPad) : 0;
+            XYTextAnnotation a = new XYTextAnnotation(nearLeft ? p.label() : p.label() + "    ", p.x() + shift, p.y());
             a.setFont(NOTE_FONT);
             a.setPaint(MARK);
-            a.setTextAnchor(TextAnchor.TOP_RIGHT);
+            a.setTextAnchor(nearLeft ? TextAnchor.TOP_LEFT : TextAnchor.TOP_RIGHT);
             steps.addAnnotation(a, Layer.FOREGROUND);
         }
         if (!f.highlighted().isEmpty()) {

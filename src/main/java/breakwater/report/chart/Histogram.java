@@ -5,8 +5,17 @@ import java.util.List;
 
 import static breakwater.report.chart.Checks.require;
 
-/** Histogram data: {@code values} counted in {@code bins} equal bins; {@code unit} is an SI symbol or "". */
-public record Histogram(String axisLabel, String unit, double[] values, int bins, List<Limit> limits) {
+/**
+ * Histogram data: {@code values} counted in {@code bins} equal bins; {@code unit} is an SI symbol or "".
+ * Values above {@code failAbove} (NaN: none) are failing samples, drawn shaded apart from the rest.
+ */
+public record Histogram(String axisLabel, String unit, double[] values, int bins, List<Limit> limits,
+                        double failAbove) {
+    /** A histogram with no failing values marked. */
+    public Histogram(String axisLabel, String unit, double[] values, int bins, List<Limit> limits) {
+        this(axisLabel, unit, values, bins, limits, Double.NaN);
+    }
+
     public Histogram {
         require(axisLabel != null && unit != null, "histogram label or unit is null");
         values = values.clone();
@@ -26,7 +35,8 @@ public record Histogram(String axisLabel, String unit, double[] values, int bins
     @Override
     public boolean equals(Object o) {
         return o instanceof Histogram h && h.axisLabel.equals(axisLabel) && h.unit.equals(unit)
-                && Arrays.equals(h.values, values) && h.bins == bins && h.limits.equals(limits);
+                && Arrays.equals(h.values, values) && h.bins == bins && h.limits.equals(limits)
+                && Double.compare(h.failAbove, failAbove) == 0;
     }
 
     @Override

@@ -1,6 +1,8 @@
 package breakwater.report.chart;
 
 import org.jfree.chart.JFreeChart;
+import org.jfree.chart.LegendItem;
+import org.jfree.chart.LegendItemCollection;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
@@ -12,6 +14,7 @@ import org.jfree.chart.ui.RectangleInsets;
 import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.statistics.HistogramDataset;
 
+import java.awt.geom.Rectangle2D;
 import java.util.Arrays;
 
 import static breakwater.report.chart.ChartStyle.DASHED;
@@ -44,7 +47,24 @@ public final class HistogramChart {
             hi += pad;
         }
         HistogramDataset data = new HistogramDataset();
-        data.addSeries("values", values, h.bins(), lo, hi);
+        double fail = h.failAbove();
+        boolean split = !Double.isNaN(fail) && Arrays.stream(values).anyMatch(v -> v > fail);
+        if (split) {
+            // bins laid so the failing threshold is a bin edge: every bin is all passing or all failing
+            double w = (hi - lo) / h.bins();
+            double start = fail - Math.ceil((fail - lo) / w - 1e-9) * w;
+            int n = (int) Math.ceil((hi - start) / w - 1e-9);
+            n = Math.max(n, 1);
+            double end = start + n * w;
+            double[] pass = Arrays.stream(values).filter(v -> v <= fail).toArray();
+            double[] over = Arrays.stream(values).filter(v -> v > fail).toArray();
+            data.addSeries("within the allowance", pass.length > 0 ? pass : new double[0], n, start, end);
+            data.addSeries("beyond the allowance (failing samples)", over, n, start, end);
+            lo = Math.min(lo, start);
+            hi = Math.max(hi, end);
+        } else {
+            data.addSeries("values", values, h.bins(), lo, hi);
+        }
         double axisLo = lo;
         double axisHi = hi;
         for (Limit l : h.limits()) {
@@ -60,6 +80,8 @@ public final class HistogramChart {
         bars.setDrawBarOutline(true);
         bars.setSeriesPaint(0, withAlpha(seriesColour(0), 190));
         bars.setSeriesOutlinePaint(0, seriesColour(0).darker());
+        bars.setSeriesPaint(1, withAlpha(LIMIT, 150));
+        bars.setSeriesOutlinePaint(1, LIMIT.darker());
         XYPlot plot = new XYPlot(data, x, y, bars);
         ChartStyle.style(plot);
         plot.setDomainGridlinesVisible(false);
@@ -76,14 +98,24 @@ public final class HistogramChart {
             plot.addDomainMarker(m, Layer.FOREGROUND);
             left = !left;
         }
-        return ChartStyle.chart(plot, false);
+        if (split) {
+            LegendItemCollection legend = new LegendItemCollection();
+            legend.add(new LegendItem("within the allowance", null, null, null,
+                    new Rectangle2D.Double(-6, -5, 12, 10), withAlpha(seriesColour(0), 190)));
+            legend.add(new LegendItem("beyond the allowance: failing samples", null, null, null,
+                    new Rectangle2D.Double(-6, -5, 12, 10), withAlpha(LIMIT, 150)));
+            plot.setFixedLegendItems(legend);
+        }
+        return ChartStyle.chart(plot, split);
     }
 
     /** The largest count of any bin, at least 1. */
     private static int maxCount(HistogramDataset d) {
         int max = 1;
-        for (int i = 0; i < d.getItemCount(0); i++) {
-            max = Math.max(max, d.getY(0, i).intValue());
+        for (int s = 0; s < d.getSeriesCount(); s++) {
+            for (int i = 0; i < d.getItemCount(s); i++) {
+                max = Math.max(max, d.getY(s, i).intValue());
+            }
         }
         return max;
     }
