@@ -75,6 +75,11 @@ record Inputs(Scenario scenario, Catalog catalog, Optional<Footprint> footprint,
 
     private static Inputs loadChecked(Path scenarioFile, String footprintName) throws InputException, IOException {
         Scenario scenario = ScenarioReader.read(scenarioFile, display(scenarioFile));
+        List<Diagnostic> implausible = breakwater.scenario.ScenarioRanges.refusals(scenario,
+                breakwater.scenario.ScenarioPlaces.of(scenarioFile, display(scenarioFile)));
+        if (!implausible.isEmpty()) {
+            throw new InputException(implausible);
+        }
         Catalog catalog = CatalogReader.read(scenario.catalogFile(), display(scenario.catalogFile()));
         Optional<Footprint> footprint = Optional.empty();
         if (!footprintName.isEmpty()) {
@@ -102,11 +107,22 @@ record Inputs(Scenario scenario, Catalog catalog, Optional<Footprint> footprint,
     CapacitorBank bank(Path file, boolean acceptLowRating) throws InputException, IOException {
         CapacitorBank bank = bank(file);
         double highest = VoltageRatings.highestRailVoltage(scenario.rail());
-        List<String> low = VoltageRatings.underratedInBank(bank.entries(), highest);
-        if (!low.isEmpty() && !acceptLowRating) {
-            throw new InputException(List.of(Diagnostic.of(display(file), "rated below the rail's highest voltage "
-                    + volts(highest) + " (nominal plus tolerance): " + String.join(", ", low)).withHint("use parts "
-                    + "rated for the rail, or give " + ACCEPT_LOW_RATING + " to judge the bank anyway")));
+        if (acceptLowRating) {
+            return bank;
+        }
+        List<String> lines = Files.readAllLines(file, java.nio.charset.StandardCharsets.UTF_8);
+        List<Diagnostic> problems = new java.util.ArrayList<>();
+        for (var e : bank.entries()) {
+            List<String> low = VoltageRatings.underrated(List.of(e.part()), highest);
+            if (!low.isEmpty()) {
+                problems.add(Diagnostic.at(display(file), lineOf(lines, e.part().name()), 1, low.get(0)
+                        + " is rated below the rail's highest voltage " + volts(highest) + " (nominal plus "
+                        + "tolerance)").withHint("use a part rated for the rail, or give " + ACCEPT_LOW_RATING
+                        + " to judge the bank anyway"));
+            }
+        }
+        if (!problems.isEmpty()) {
+            throw new InputException(problems);
         }
         return bank;
     }
@@ -125,11 +141,29 @@ record Inputs(Scenario scenario, Catalog catalog, Optional<Footprint> footprint,
         double highest = VoltageRatings.highestRailVoltage(scenario.rail());
         List<Part> rated = VoltageRatings.ratedFor(catalog.parts(), highest);
         if (rated.isEmpty()) {
-            throw new InputException(List.of(Diagnostic.of(catalog.source(), "no part is rated for the rail's "
+            int line = 1;
+            try {
+                line = lineOf(Files.readAllLines(scenario.catalogFile(), java.nio.charset.StandardCharsets.UTF_8),
+                        catalog.parts().get(0).name());
+            } catch (IOException unreadable) {
+                // read a moment ago; the message still names the file
+            }
+            throw new InputException(List.of(Diagnostic.at(catalog.source(), line, 1, "no part is rated for the rail's "
                     + "highest voltage " + volts(highest) + " (nominal plus tolerance)").withHint("add parts rated "
                     + "for the rail, or give " + ACCEPT_LOW_RATING + " to search the catalog anyway")));
         }
         return rated;
+    }
+
+    /** The 1-based line of the first row whose first field is {@code name} (1 when none is found). */
+    private static int lineOf(List<String> lines, String name) {
+        for (int i = 0; i < lines.size(); i++) {
+            String l = lines.get(i).strip();
+            if (l.startsWith(name + ",") || l.startsWith("\"" + name + "\",")) {
+                return i + 1;
+            }
+        }
+        return 1;
     }
 
     private static String volts(double v) {

@@ -27,9 +27,9 @@ public final class ScenarioPlaces {
         return new ScenarioPlaces(displayName, new TomlLocator(TextFiles.readUtf8(file, displayName)));
     }
 
-    /** A message at the key of {@code path} (its table's header when the key is not found). */
+    /** A message at the value of {@code path} (its key, or its table's header, when that is not found). */
     public Diagnostic at(List<String> path, String message) {
-        TomlLocator.Pos p = locator.key(path);
+        TomlLocator.Pos p = locator.value(path);
         return Diagnostic.at(source, p.line(), p.column(), message);
     }
 }

@@ -27,8 +27,8 @@ class CaseWarningsCliTest {
         CliTest.Run r = run("check", rail.toString(), "--bank", bank.toString(), "--footprint", "two-via",
                 "--out", out.toString());
         assertThat(r.code()).as(r.err()).isIn(ExitCodes.OK, ExitCodes.SPEC_NOT_MET);
-        String board = "rail.toml:" + boardLine + ":1: board.max_per_case.0420: no part of the catalog has case 0420";
-        String footprint = "rail.toml:" + footprintLine + ":1: footprint.two-via.0420: no part of the catalog has "
+        String board = "rail.toml:" + boardLine + ":8: board.max_per_case.0420: no part of the catalog has case 0420";
+        String footprint = "rail.toml:" + footprintLine + ":8: footprint.two-via.0420: no part of the catalog has "
                 + "case 0420";
         String left = "footprint two-via gives no mounting inductance for case 7343: those parts keep the catalog's "
                 + "mount_inductance";
