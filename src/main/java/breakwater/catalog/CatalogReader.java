@@ -8,6 +8,7 @@ import breakwater.diagnostic.TextFiles;
 import breakwater.units.CaseCode;
 import breakwater.units.EngineeringNotation;
 import breakwater.units.NotationException;
+import breakwater.units.Plausible;
 import breakwater.units.Quantity;
 import java.io.IOException;
 import java.io.Reader;
@@ -201,12 +202,13 @@ public final class CatalogReader {
                     + "' is not positive, a rated voltage must be > 0");
         }
         double tolerance = r.optional("tolerance", Quantity.FRACTION, Double.NaN);
-        if (tolerance < 0 || tolerance > 1) {
+        if (tolerance < 0 || tolerance >= 1) {
+            // 100 % would let a Monte Carlo draw take the capacitance to 0: refused here, at its cell
             String hint = tolerance > 1 && !r.text("tolerance").contains("%")
                     ? "write '" + r.text("tolerance") + " %' for percent; a plain number is a ratio" : "";
             r.problem(Diagnostic.at(source, r.cell("tolerance").line(), r.cell("tolerance").column(),
-                    "tolerance '" + r.text("tolerance") + "' is outside 0..100 %, a tolerance is a share of the"
-                            + " nominal capacitance").withHint(hint));
+                    "tolerance '" + r.text("tolerance") + "' is outside 0..100 % (100 % itself excluded), a "
+                            + "tolerance is a share of the nominal capacitance").withHint(hint));
         }
         double retention = r.optional("dc_bias_retention", Quantity.FRACTION, 1.0);
         if (!(retention > 0 && retention <= 1) && !Double.isNaN(retention)) {
@@ -218,6 +220,13 @@ public final class CatalogReader {
                             + " voltage").withHint(hint));
         }
         int maxCount = r.count("max_count");
+        // values of the right sign but outside what any real part has: refused with the range
+        r.plausible("capacitance", capacitance, Plausible.CAPACITANCE);
+        r.plausible("esr", esr, Plausible.ESR);
+        r.plausible("esl", esl, Plausible.ESL);
+        r.plausible("mount_inductance", mount, Plausible.MOUNT);
+        r.plausible("cost", cost, Plausible.PRICE);
+        r.plausible("voltage_rating", rating, Plausible.RATING);
 
         if (r.failed()) {
             return Optional.empty();
@@ -285,6 +294,14 @@ public final class CatalogReader {
                 error(cell, column + ": " + e.getMessage());
                 return Double.NaN;
             }
+        }
+
+        /** Refuses a value of the right sign (others are reported already) that lies outside {@code range}. */
+        void plausible(String column, double v, Plausible range) {
+            if (Double.isNaN(v) || v < 0 || (v == 0 && !range.zeroOk()) || range.accepts(v)) {
+                return;
+            }
+            error(cell(column), range.refusal(column, text(column)));
         }
 
         int count(String column) {

@@ -42,7 +42,8 @@ final class CheckCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         ResultWriter.Target target = export.target(output);
         Inputs in = scenario.load(output.footprint);
-        var bank = in.bank(bankFile);
+        target = target.withWarnings(in.warnings());
+        var bank = in.bank(bankFile, output.acceptLowRating);
         BankEvaluator judge = new BankEvaluator(in.scenario(), in.footprint());
         try (Searches progress = new Searches(spec.commandLine().getErr(), output.silent(), false)) {
             CheckResult r = CheckResult.check(judge, output.footprint, bank, monteCarlo.settings(in.scenario()),

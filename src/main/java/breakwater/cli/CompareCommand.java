@@ -2,6 +2,7 @@ package breakwater.cli;
 
 import breakwater.optimize.CompareResult;
 import breakwater.report.CompareReport;
+import breakwater.report.ResultWriter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -53,14 +54,15 @@ final class CompareCommand implements Callable<Integer> {
         if (!output.footprint.isEmpty()) {
             throw new UsageException("compare takes --footprints A,B,... (plural), not --footprint");
         }
-        var target = output.target(); // an --out that cannot be made is said before any work
+        ResultWriter.Target target = output.target(); // an --out that cannot be made is said before any work
         Inputs in = scenario.load("");
+        target = target.withWarnings(in.warnings());
         List<String> names = FootprintNames.chosen(footprintNames, in.scenario());
-        var given = bankFile == null ? Optional.<breakwater.design.CapacitorBank>empty() : Optional.of(in.bank(bankFile));
+        var given = bankFile == null ? Optional.<breakwater.design.CapacitorBank>empty() : Optional.of(in.bank(bankFile, output.acceptLowRating));
         var settings = search.settings(in.scenario());
         try (Searches progress = new Searches(spec.commandLine().getErr(), output.silent(), true)) {
             CompareResult r = CompareResult.compare(in.scenario(), names, given,
-                    Optional.ofNullable(bankFile).map(Inputs::display), in.catalog().parts(), settings, progress);
+                    Optional.ofNullable(bankFile).map(Inputs::display), in.searchParts(output.acceptLowRating), settings, progress);
             CompareReport.write(r, target, spec.commandLine().getOut());
             return ExitCodes.of(r.verdict());
         }

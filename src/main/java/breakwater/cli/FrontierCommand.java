@@ -3,6 +3,7 @@ package breakwater.cli;
 import breakwater.design.BankEvaluator;
 import breakwater.optimize.FrontierResult;
 import breakwater.report.FrontierReport;
+import breakwater.report.ResultWriter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -56,8 +57,9 @@ final class FrontierCommand implements Callable<Integer> {
             throw new UsageException("--points is 2 (the tightest limit and the spec's) to " + MAX_POINTS + ", got "
                     + points);
         }
-        var target = output.target(); // an --out that cannot be made is said before any work
+        ResultWriter.Target target = output.target(); // an --out that cannot be made is said before any work
         Inputs in = scenario.load(output.footprint);
+        target = target.withWarnings(in.warnings());
         BankEvaluator judge = new BankEvaluator(in.scenario(), in.footprint());
         var settings = search.settings(in.scenario());
         long shareMs = settings.timeLimit().toMillis() / (points + 1);
@@ -70,7 +72,7 @@ final class FrontierCommand implements Callable<Integer> {
                     + seconds(MIN_SEARCH_MS * (points + 1)) + ")");
         }
         try (Searches progress = new Searches(spec.commandLine().getErr(), output.silent(), true)) {
-            FrontierResult r = FrontierResult.frontier(judge, output.footprint, in.catalog().parts(), settings, points,
+            FrontierResult r = FrontierResult.frontier(judge, output.footprint, in.searchParts(output.acceptLowRating), settings, points,
                     progress);
             FrontierReport.write(r, target, spec.commandLine().getOut());
             return ExitCodes.of(r.verdict());

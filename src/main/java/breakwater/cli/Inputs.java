@@ -3,7 +3,9 @@ package breakwater.cli;
 import breakwater.catalog.BankFileReader;
 import breakwater.catalog.Catalog;
 import breakwater.catalog.CatalogReader;
+import breakwater.catalog.Part;
 import breakwater.design.CapacitorBank;
+import breakwater.design.VoltageRatings;
 import breakwater.diagnostic.Diagnostic;
 import breakwater.diagnostic.InputException;
 import breakwater.diagnostic.Suggestions;
@@ -18,10 +20,66 @@ import java.util.List;
 import java.util.Optional;
 
 /** A scenario with its catalog and the chosen footprint, read and checked before anything is written. */
-record Inputs(Scenario scenario, Catalog catalog, Optional<Footprint> footprint) {
+record Inputs(Scenario scenario, Catalog catalog, Optional<Footprint> footprint, List<String> warnings) {
+
+    Inputs {
+        warnings = List.copyOf(warnings);
+    }
 
     static Inputs load(Path scenarioFile, String footprintName) throws InputException, IOException {
+        Inputs in = loadChecked(scenarioFile, footprintName);
+        return new Inputs(in.scenario(), in.catalog(), in.footprint(), caseWarnings(scenarioFile, in));
+    }
+
+    /**
+     * Case codes the scenario names that no catalog part has ({@code [footprint.NAME]},
+     * {@code [board.max_per_case]}), located in the scenario; and, for the footprint chosen, the catalog's
+     * cases it gives no mounting inductance for (those parts keep the catalog's {@code mount_inductance}).
+     */
+    static List<String> caseWarnings(Path scenarioFile, Inputs in) throws InputException, IOException {
+        java.util.Set<String> cases = new java.util.TreeSet<>();
+        in.catalog().parts().forEach(p -> cases.add(p.caseCode()));
+        List<String> out = new java.util.ArrayList<>();
+        breakwater.scenario.ScenarioPlaces places = null;
+        for (String code : in.scenario().board().maxPerCase().keySet()) {
+            if (!cases.contains(code)) {
+                places = places != null ? places : breakwater.scenario.ScenarioPlaces.of(scenarioFile,
+                        display(scenarioFile));
+                out.add(places.at(List.of("board", "max_per_case", code), "board.max_per_case." + code
+                        + ": no part of the catalog has case " + code + ", so this limit limits nothing "
+                        + "(a typing slip?)").render());
+            }
+        }
+        for (Footprint f : in.scenario().footprints().values()) {
+            for (String code : f.mountInductanceByCaseH().keySet()) {
+                if (!cases.contains(code)) {
+                    places = places != null ? places : breakwater.scenario.ScenarioPlaces.of(scenarioFile,
+                            display(scenarioFile));
+                    out.add(places.at(List.of("footprint", f.name(), code), "footprint." + f.name() + "." + code
+                            + ": no part of the catalog has case " + code + ", so this mounting inductance is "
+                            + "never used (a typing slip?)").render());
+                }
+            }
+        }
+        if (in.footprint().isPresent()) {
+            Footprint f = in.footprint().get();
+            List<String> left = cases.stream().filter(c -> !f.mountInductanceByCaseH().containsKey(c))
+                    .map(c -> c.isEmpty() ? "(no case)" : c).toList();
+            if (!left.isEmpty()) {
+                out.add("footprint " + f.name() + " gives no mounting inductance for case" + (left.size() == 1 ? " "
+                        : "s ") + String.join(", ", left) + ": those parts keep the catalog's mount_inductance");
+            }
+        }
+        return out;
+    }
+
+    private static Inputs loadChecked(Path scenarioFile, String footprintName) throws InputException, IOException {
         Scenario scenario = ScenarioReader.read(scenarioFile, display(scenarioFile));
+        List<Diagnostic> implausible = breakwater.scenario.ScenarioRanges.refusals(scenario,
+                breakwater.scenario.ScenarioPlaces.of(scenarioFile, display(scenarioFile)));
+        if (!implausible.isEmpty()) {
+            throw new InputException(implausible);
+        }
         Catalog catalog = CatalogReader.read(scenario.catalogFile(), display(scenario.catalogFile()));
         Optional<Footprint> footprint = Optional.empty();
         if (!footprintName.isEmpty()) {
@@ -34,12 +92,82 @@ record Inputs(Scenario scenario, Catalog catalog, Optional<Footprint> footprint)
                 throw new UsageException("unknown footprint '" + footprintName + "': " + known + "." + hint);
             }
         }
-        return new Inputs(scenario, catalog, footprint);
+        return new Inputs(scenario, catalog, footprint, List.of());
     }
 
     /** The bank in {@code file} (CSV: part,count), its parts from the catalog. */
     CapacitorBank bank(Path file) throws InputException, IOException {
         return new CapacitorBank(BankFileReader.read(file, display(file), catalog, scenario.regionNames()));
+    }
+
+    /**
+     * The bank in {@code file}, refused when a part of it is rated below the rail's highest voltage
+     * ({@link VoltageRatings}) unless {@code acceptLowRating}.
+     */
+    CapacitorBank bank(Path file, boolean acceptLowRating) throws InputException, IOException {
+        CapacitorBank bank = bank(file);
+        double highest = VoltageRatings.highestRailVoltage(scenario.rail());
+        if (acceptLowRating) {
+            return bank;
+        }
+        List<String> lines = Files.readAllLines(file, java.nio.charset.StandardCharsets.UTF_8);
+        List<Diagnostic> problems = new java.util.ArrayList<>();
+        for (var e : bank.entries()) {
+            List<String> low = VoltageRatings.underrated(List.of(e.part()), highest);
+            if (!low.isEmpty()) {
+                problems.add(Diagnostic.at(display(file), lineOf(lines, e.part().name()), 1, low.get(0)
+                        + " is rated below the rail's highest voltage " + volts(highest) + " (nominal plus "
+                        + "tolerance)").withHint("use a part rated for the rail, or give " + ACCEPT_LOW_RATING
+                        + " to judge the bank anyway"));
+            }
+        }
+        if (!problems.isEmpty()) {
+            throw new InputException(problems);
+        }
+        return bank;
+    }
+
+    /** The option that lets parts rated below the rail's highest voltage be judged and chosen. */
+    static final String ACCEPT_LOW_RATING = "--accept-low-rating";
+
+    /**
+     * The catalog parts a search may choose: those rated for the rail's highest voltage (or unrated),
+     * all of them with {@code acceptLowRating}; refused when none is left.
+     */
+    List<Part> searchParts(boolean acceptLowRating) throws InputException {
+        if (acceptLowRating) {
+            return catalog.parts();
+        }
+        double highest = VoltageRatings.highestRailVoltage(scenario.rail());
+        List<Part> rated = VoltageRatings.ratedFor(catalog.parts(), highest);
+        if (rated.isEmpty()) {
+            int line = 1;
+            try {
+                line = lineOf(Files.readAllLines(scenario.catalogFile(), java.nio.charset.StandardCharsets.UTF_8),
+                        catalog.parts().get(0).name());
+            } catch (IOException unreadable) {
+                // read a moment ago; the message still names the file
+            }
+            throw new InputException(List.of(Diagnostic.at(catalog.source(), line, 1, "no part is rated for the rail's "
+                    + "highest voltage " + volts(highest) + " (nominal plus tolerance)").withHint("add parts rated "
+                    + "for the rail, or give " + ACCEPT_LOW_RATING + " to search the catalog anyway")));
+        }
+        return rated;
+    }
+
+    /** The 1-based line of the first row whose first field is {@code name} (1 when none is found). */
+    private static int lineOf(List<String> lines, String name) {
+        for (int i = 0; i < lines.size(); i++) {
+            String l = lines.get(i).strip();
+            if (l.startsWith(name + ",") || l.startsWith("\"" + name + "\",")) {
+                return i + 1;
+            }
+        }
+        return 1;
+    }
+
+    private static String volts(double v) {
+        return String.format(java.util.Locale.ROOT, "%.4g V", v);
     }
 
     /**

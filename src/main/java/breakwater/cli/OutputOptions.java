@@ -34,6 +34,11 @@ final class OutputOptions {
         }
     }
 
+    @Option(names = Inputs.ACCEPT_LOW_RATING, description = "Let parts rated below the rail's highest voltage "
+            + "(nominal plus tolerance) be judged (check, trim, compare --bank) and chosen (the searches); by default "
+            + "a bank with one is refused and the searches leave them out.")
+    boolean acceptLowRating;
+
     @Option(names = "--json", description = "Print summary.json to standard output instead of the text summary.")
     boolean json;
 

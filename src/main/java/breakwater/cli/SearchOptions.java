@@ -13,7 +13,8 @@ final class SearchOptions {
     Long seed;
 
     @Option(names = "--time-limit", paramLabel = "DURATION", converter = Durations.Converter.class,
-            description = "Search time, e.g. 30s, 2min, 500ms. Default: [solver] time_limit, else 30 s.")
+            description = "Search time, e.g. 30s, 2min, 500ms, counted from the program's start; the best bank "
+                    + "so far is then judged and written. Default: [solver] time_limit, else 30 s.")
     Duration timeLimit;
 
     @Option(names = "--moves", paramLabel = "N",
@@ -28,6 +29,13 @@ final class SearchOptions {
 
     SearchSettings settings(Scenario scenario) {
         Duration limit = timeLimit != null ? timeLimit : scenario.solver().timeLimit();
+        // the limit counts from the program's start: reading the inputs is part of the time promised
+        Duration spent = Main.programStart().map(t -> Duration.between(t, java.time.Instant.now()))
+                .orElse(Duration.ZERO);
+        limit = spent.isNegative() ? limit : limit.minus(spent);
+        if (limit.compareTo(Duration.ofMillis(1)) < 0) {
+            limit = Duration.ofMillis(1); // no time left: the search ends at once with the bank it starts from
+        }
         long s = seed != null ? seed : scenario.solver().seed();
         SearchSettings settings = SearchSettings.defaults(limit, s);
         if (moves < 0) {

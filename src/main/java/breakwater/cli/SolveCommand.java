@@ -70,12 +70,13 @@ final class SolveCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         ResultWriter.Target target = export.target(output);
         Inputs in = scenario.load(output.footprint);
+        target = target.withWarnings(in.warnings());
         BankEvaluator judge = new BankEvaluator(in.scenario(), in.footprint());
         var settings = search.settings(in.scenario());
         var draws = monteCarlo.settings(in.scenario());
         // progress stays on the error stream with --json (only --quiet silences it)
         try (Searches progress = new Searches(spec.commandLine().getErr(), output.quiet, true)) {
-            SolveResult r = SolveResult.solve(judge, output.footprint, in.catalog().parts(), settings,
+            SolveResult r = SolveResult.solve(judge, output.footprint, in.searchParts(output.acceptLowRating), settings,
                     margin(in.scenario().designMarginV()), draws, progress);
             SolveReport.write(r, target, spec.commandLine().getOut());
             return ExitCodes.of(r.verdict());

@@ -81,14 +81,15 @@ final class TrimCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         ResultWriter.Target target = export.target(output);
         Inputs in = scenario.load(output.footprint);
+        target = target.withWarnings(in.warnings());
         Path file = in.existingBankFile(bankFile);
-        var existing = in.bank(file);
+        var existing = in.bank(file, output.acceptLowRating);
         BankEvaluator judge = new BankEvaluator(in.scenario(), in.footprint());
         var settings = search.settings(in.scenario());
         var draws = monteCarlo.settings(in.scenario());
         try (Searches progress = new Searches(spec.commandLine().getErr(), output.silent(), true)) {
             TrimResult r = TrimResult.trim(judge, output.footprint, Inputs.display(file), existing, keep, noNewParts,
-                    in.catalog().parts(), settings, draws, progress);
+                    in.searchParts(output.acceptLowRating), settings, draws, progress);
             TrimReport.write(r, target, spec.commandLine().getOut());
             return ExitCodes.of(r.verdict());
         }

@@ -31,6 +31,8 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.LongAdder;
+import java.util.function.BooleanSupplier;
 
 /**
  * Searches part counts for the cheapest bank that meets the rail's spec, with Timefold local search.
@@ -60,6 +62,9 @@ public final class BankSearch {
     private volatile BendableScore bestScore;
     private volatile int[] bestCounts;
     private final List<SearchResult.Improvement> history = new ArrayList<>();
+    /** Trial banks the start phase sized on impedance, and whether it is still running (for progress). */
+    private final LongAdder startTrials = new LongAdder();
+    private volatile boolean starting = true;
 
     /**
      * @param evaluator  the judge
@@ -102,7 +107,7 @@ public final class BankSearch {
         }
         double elapsed = (System.nanoTime() - startNanos) / 1e9;
         return java.util.Optional.of(new SearchProgress(elapsed, candidates.bank(counts),
-                pool.peek(counts), pool.requests()));
+                pool.peek(counts), pool.requests(), starting, startTrials.sum()));
     }
 
     /** Runs the search from {@code start} (may be empty) and returns the best bank. */
@@ -117,15 +122,19 @@ public final class BankSearch {
         if (!pool.judge(given).feasible()) {
             // shape from the given bank and from scratch; start from the better of the two (a failing
             // existing bank can be a poor place to grow from)
+            // the start phase keeps the time limit and the stop request too, ending with what it has
+            long deadline = startNanos + settings.timeLimit().toNanos();
+            BooleanSupplier goOn = () -> !stopRequested.get() && System.nanoTime() < deadline;
             int[] grown = ImpedanceShaping.start(pool.evaluator(), candidates, maxCounts, given,
-                    c -> pool.judge(c).feasible());
+                    c -> pool.judge(c).feasible(), goOn, startTrials);
             int[] fresh = ImpedanceShaping.start(pool.evaluator(), candidates, maxCounts, new int[given.length],
-                    c -> pool.judge(c).feasible());
+                    c -> pool.judge(c).feasible(), goOn, startTrials);
             shaped = ScoreLevels.of(pool.judge(fresh)).compareTo(ScoreLevels.of(pool.judge(grown))) > 0
                     ? fresh : grown;
         }
         int[] startCounts = shaped;
         offer(startCounts);
+        starting = false;
         ExecutorService exec = Executors.newFixedThreadPool(settings.solvers(), r -> {
             Thread t = new Thread(r, "breakwater-solver");
             t.setDaemon(true);
@@ -192,7 +201,8 @@ public final class BankSearch {
         int[] from = start;
         for (int round = 0; ; round++) {
             long remaining = deadline - System.nanoTime();
-            if (stopRequested.get() || (round > 0 && remaining < 200_000_000L)) {
+            // no solve starts after the time limit (the start phase may have used it all) or a stop
+            if (stopRequested.get() || remaining <= 0 || (round > 0 && remaining < 200_000_000L)) {
                 break;
             }
             long seed = settings.seed() + k + (long) round * settings.solvers();

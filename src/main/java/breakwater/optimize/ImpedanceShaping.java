@@ -14,6 +14,8 @@ import breakwater.scenario.Scenario;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.atomic.LongAdder;
+import java.util.function.BooleanSupplier;
 import java.util.function.Predicate;
 
 /**
@@ -37,6 +39,17 @@ final class ImpedanceShaping {
      */
     static int[] start(BankEvaluator evaluator, Candidates candidates, int[] maxCounts, int[] from,
                        Predicate<int[]> meetsSpec) {
+        return start(evaluator, candidates, maxCounts, from, meetsSpec, () -> true, new LongAdder());
+    }
+
+    /**
+     * As {@link #start(BankEvaluator, Candidates, int[], int[], Predicate)}, stopping with the bank built so far
+     * as soon as {@code goOn} says no (the time limit, a stop request): it is asked before every trial.
+     *
+     * @param trials counts the trial banks sized (one impedance sweep each), for progress
+     */
+    static int[] start(BankEvaluator evaluator, Candidates candidates, int[] maxCounts, int[] from,
+                       Predicate<int[]> meetsSpec, BooleanSupplier goOn, LongAdder trials) {
         Scenario s = evaluator.scenario();
         List<SeriesBranch> units = new ArrayList<>();
         for (Part p : candidates.parts()) {
@@ -66,6 +79,10 @@ final class ImpedanceShaping {
                     if (counts[p] >= maxCounts[p]) {
                         continue;
                     }
+                    if (!goOn.getAsBoolean()) {
+                        return counts;
+                    }
+                    trials.increment();
                     counts[p]++;
                     boolean fits = BoardCheck.violations(candidates.bank(counts), s.board(), s.regions()).isEmpty();
                     double a = fits ? area(engine, counts, re, im, mag, line) : area;
@@ -84,7 +101,7 @@ final class ImpedanceShaping {
                 counts[best]++;
                 area = bestArea;
             }
-            if (meetsSpec.test(counts)) {
+            if (!goOn.getAsBoolean() || meetsSpec.test(counts)) {
                 return counts;
             }
             alpha *= 0.9;

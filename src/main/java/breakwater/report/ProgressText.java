@@ -65,10 +65,20 @@ public final class ProgressText {
     public static String line(SearchProgress p, BankEvaluator judge) {
         Scenario scenario = judge.scenario();
         Judgement j = p.best();
-        return String.format(Locale.ROOT, "  %6.1f s  %s; cost %.4f%s; worst droop %s of %s allowed; %d parts; %.0f banks/s",
+        return String.format(Locale.ROOT, "  %6.1f s  %s; cost %.4f%s; worst droop %s of %s allowed; %d parts; %s",
                 p.elapsedS(), inWords(j), j.costTotal(), Texts.currency(scenario.cost().currency()),
                 format(j.droopV(), VOLTAGE), format(judge.operatingPointV() - judge.limits().lowerV(), VOLTAGE),
-                j.totalParts(), p.evaluationsPerSecond());
+                j.totalParts(), speed(p));
+    }
+
+    /** "1234 banks/s", "1 bank/s"; in the start phase, what it has done instead (it judges few banks). */
+    static String speed(SearchProgress p) {
+        if (p.starting()) {
+            return "building the start bank: " + p.startTrials() + " trial bank" + Texts.plural(p.startTrials())
+                    + " sized on impedance";
+        }
+        long rate = Math.round(p.evaluationsPerSecond());
+        return rate + (rate == 1 ? " bank/s" : " banks/s");
     }
 
     /**

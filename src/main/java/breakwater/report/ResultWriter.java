@@ -38,13 +38,16 @@ public final class ResultWriter {
      * @param outDir     the folder for the result files, if any
      * @param outDirName how the user knows that folder (in the "Wrote ..." line)
      * @param exports    the files for other tools to write beside the results (SPICE decks, Touchstone)
+     * @param warnings   what the inputs allow but a careful reader should know, each a located message;
+     *                   shown in the console, summary.json {@code warnings[]} and the report's cautions
      */
     public record Target(boolean json, boolean quiet, Optional<Path> outDir, String outDirName,
-                         List<ExportFormat> exports) {
+                         List<ExportFormat> exports, List<String> warnings) {
         public Target {
             Objects.requireNonNull(outDir, "outDir");
             Objects.requireNonNull(outDirName, "outDirName");
             exports = List.copyOf(exports);
+            warnings = List.copyOf(warnings);
             if (!exports.isEmpty() && outDir.isEmpty()) {
                 throw new IllegalArgumentException("exports are written into the output folder; none was given");
             }
@@ -52,7 +55,18 @@ public final class ResultWriter {
 
         /** The same target, also writing {@code formats}. */
         public Target withExports(List<ExportFormat> formats) {
-            return new Target(json, quiet, outDir, outDirName, formats);
+            return new Target(json, quiet, outDir, outDirName, formats, warnings);
+        }
+
+        public Target(boolean json, boolean quiet, Optional<Path> outDir, String outDirName, List<ExportFormat> exports) {
+            this(json, quiet, outDir, outDirName, exports, List.of());
+        }
+
+        /** The same target, with {@code more} warnings after its own. */
+        public Target withWarnings(List<String> more) {
+            List<String> all = new ArrayList<>(warnings);
+            all.addAll(more);
+            return new Target(json, quiet, outDir, outDirName, exports, all);
         }
     }
 
@@ -74,6 +88,8 @@ public final class ResultWriter {
         summary.put("meets_spec", run.verdict().meetsSpec());
         run.search().ifPresent(r -> SummaryJson.solver(summary, r));
         mode.summary().accept(summary);
+        var warned = summary.putArray("warnings");
+        target.warnings().forEach(warned::add);
         if (target.json()) {
             StringWriter sw = new StringWriter();
             SummaryJson.write(summary, sw);
@@ -88,6 +104,11 @@ public final class ResultWriter {
                 out.print(mode.console().endsWith("\n") ? mode.console() : mode.console() + "\n");
             }
             out.println();
+            if (!target.warnings().isEmpty()) {
+                out.println("Warnings");
+                target.warnings().forEach(w -> out.println("  " + w));
+                out.println();
+            }
             out.print(Verdicts.console(run.verdict()));
         }
         if (target.outDir().isPresent()) {
@@ -104,8 +125,13 @@ public final class ResultWriter {
             written.add("worst-case.csv");
             written.addAll(RailExports.write(dir, target.exports(), new ExportedRail(scenario, run.footprintName(),
                     run.judge().footprint(), e, droop, overshoot, ExportedRail.programVersion())));
-            ReportModel model = mode.model().apply(ReportBuilder.build(new ReportBuilder.Run(run.mode(), scenario,
+            ReportModel built = mode.model().apply(ReportBuilder.build(new ReportBuilder.Run(run.mode(), scenario,
                     run.footprintName(), e, run.verdict(), droop, overshoot, run.search(), mode.sections())));
+            List<String> cautions = new ArrayList<>(built.cautions());
+            target.warnings().forEach(w -> cautions.add("Warning: " + w));
+            ReportModel model = target.warnings().isEmpty() ? built : new ReportModel(built.title(),
+                    built.subtitleLines(), built.verdict(), built.keyFigures(), built.impedance(), built.worstCase(),
+                    built.bom(), built.resonances(), built.sections(), built.settings(), cautions);
             dir.write("impedance.svg", w -> w.write(ImpedanceChart.svg(model.impedance())));
             written.add("impedance.svg");
             dir.write("worst-case.svg", w -> w.write(WorstCaseChart.svg(model.worstCase())));

@@ -202,8 +202,10 @@ class CatalogReaderTest {
                         p -> assertThat(p).startsWith("parts.csv:3:17: ").contains("tolerance '10'",
                                 "Maybe write '10 %' for percent"),
                         p -> assertThat(p).startsWith("parts.csv:4:17: ").contains("tolerance '-5%'"));
-        // the edges 0 % and 100 % are inside the rule
-        assertThat(parse(header + "A,1u,1m,1n,1n,1,0 %\nB,1u,1m,1n,1n,1,100 %\n").parts()).hasSize(2);
+        // the edge 0 % is inside the rule; 100 % is not: a Monte Carlo draw could take the capacitance to 0
+        assertThat(parse(header + "A,1u,1m,1n,1n,1,0 %\nB,1u,1m,1n,1n,1,99.9 %\n").parts()).hasSize(2);
+        assertThat(problems(header + "A,1u,1m,1n,1n,1,100 %\n")).singleElement().asString()
+                .startsWith("parts.csv:2:17: ").contains("tolerance '100 %'", "100 % itself excluded");
     }
 
     @Test
