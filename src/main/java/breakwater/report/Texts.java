@@ -81,8 +81,9 @@ final class Texts {
         int floor = indent.length() + 1; // never break inside the head or the indentation
         while (rest.length() > width) {
             int cut = rest.lastIndexOf(' ', width);
-            while (cut > floor && rest.charAt(cut - 1) == ' ') {
-                cut--;
+            // never part a figure from its unit ("100 µs", "27.0 mV") or an operator from what follows
+            while (cut > floor && (rest.charAt(cut - 1) == ' ' || keepsWithNext(rest, cut))) {
+                cut = rest.lastIndexOf(' ', cut - 1);
             }
             if (cut <= floor) {
                 cut = rest.indexOf(' ', width); // one long word: break after it
@@ -94,6 +95,12 @@ final class Texts {
             rest = indent + rest.substring(cut).stripLeading();
         }
         return out.append(rest).append('\n').toString();
+    }
+
+    /** Whether the space at {@code cut} joins a number to the word after it, or a range's ".." to either side. */
+    private static boolean keepsWithNext(String text, int cut) {
+        char before = text.charAt(cut - 1);
+        return Character.isDigit(before) || text.startsWith("..", cut - 2) || text.startsWith(" ..", cut);
     }
 
     /** "" for one, "s" for any other count. */
