@@ -35,10 +35,10 @@ class ToleranceBudgetTest {
         assertThat(r.err()).doesNotContain("Exception");
         if (!extraRailLines.isEmpty()) {
             // the console wraps long lines to the terminal width: compare with the wrapping undone
-            String out = r.out().replaceAll("\n {11}", " ");
-            assertThat(out).contains("Budget     set point ± 1 % (9.00 mV), ripple 6.00 mV peak-to-peak (± 3.00 mV), "
+            String console = r.out().replaceAll("\n {11}", " ");
+            assertThat(console).contains("Budget     set point ± 1 % (9.00 mV), ripple 6.00 mV peak-to-peak (± 3.00 mV), "
                     + "left for the transient ± 15.0 mV (0.8850 V .. 0.9150 V)");
-            assertThat(out).contains("Z_t = 6.00 mΩ  ((V × tolerance − V × set point − ripple/2) / ΔI)");
+            assertThat(console).contains("Z_t = 6.00 mΩ  ((V × tolerance − V × set point − ripple/2) / ΔI)");
             assertThat(Files.readString(out.resolve("report.html"))).contains("Tolerance budget: set point ± 1 %");
         }
         return new ObjectMapper().readTree(out.resolve("summary.json").toFile());
