@@ -57,8 +57,8 @@ public final class Main implements Runnable {
     private static volatile byte[] reserve = new byte[256 * 1024];
 
     /**
-     * When this program started (the process's start when the system says it, else the entry into
-     * {@link #main}), for a time limit that counts from there; empty when run in-process (tests).
+     * When this program started (the Java virtual machine's start), for a time limit that counts from
+     * there; empty when run in-process (tests).
      */
     private static volatile java.util.Optional<java.time.Instant> programStart = java.util.Optional.empty();
 
@@ -67,8 +67,10 @@ public final class Main implements Runnable {
     }
 
     public static void main(String[] args) {
-        programStart = java.util.Optional.of(ProcessHandle.current().info().startInstant()
-                .orElse(java.time.Instant.now()));
+        // the Java virtual machine's own start: the launcher script execs java in its own process, so the
+        // process's start would also count the script's work before it (building the jar on a first run)
+        programStart = java.util.Optional.of(java.time.Instant.ofEpochMilli(
+                java.lang.management.ManagementFactory.getRuntimeMXBean().getStartTime()));
         boolean debug = debugAsked(args, System.getenv(DEBUG_ENV));
         // a throwable on a thread of our own (progress, a solver) ends the run like one on the main thread;
         // the writer is made now, while there is memory for it

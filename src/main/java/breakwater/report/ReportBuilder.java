@@ -252,12 +252,22 @@ public final class ReportBuilder {
             for (BankEntry be : here) {
                 lines.add(be.count() + " × " + be.part().name());
             }
+            List<String> noRoom = new ArrayList<>();
             for (var limit : region.room().maxPerCase().entrySet()) {
                 int n = here.stream().filter(b -> b.part().caseCode().equals(limit.getKey())).mapToInt(BankEntry::count).sum();
+                if (limit.getValue() == 0 && n == 0) {
+                    noRoom.add(limit.getKey());
+                    continue;
+                }
                 lines.add("case " + limit.getKey() + ": " + n + " of " + limit.getValue());
                 if (limit.getValue() > 0) {
                     used = Double.isNaN(used) ? (double) n / limit.getValue() : Math.max(used, (double) n / limit.getValue());
                 }
+            }
+            for (int k = 0; k < noRoom.size(); k += 4) {
+                // four cases a line, so the box stays narrow
+                lines.add((k == 0 ? "no room for " : "  ") + String.join(", ", noRoom.subList(k, Math.min(k + 4,
+                        noRoom.size()))) + (k + 4 < noRoom.size() ? "," : ""));
             }
             if (region.room().maxParts() > 0) {
                 double share = (double) placed / region.room().maxParts();
