@@ -264,10 +264,10 @@ public final class ReportBuilder {
                     used = Double.isNaN(used) ? (double) n / limit.getValue() : Math.max(used, (double) n / limit.getValue());
                 }
             }
-            for (int k = 0; k < noRoom.size(); k += 4) {
-                // four cases a line, so the box stays narrow
-                lines.add((k == 0 ? "no room for " : "  ") + String.join(", ", noRoom.subList(k, Math.min(k + 4,
-                        noRoom.size()))) + (k + 4 < noRoom.size() ? "," : ""));
+            for (int k = 0; k < noRoom.size(); k += 3) {
+                // three cases a line, so the text stays inside the box
+                lines.add((k == 0 ? "no room for " : "  ") + String.join(", ", noRoom.subList(k, Math.min(k + 3,
+                        noRoom.size()))) + (k + 3 < noRoom.size() ? "," : ""));
             }
             if (region.room().maxParts() > 0) {
                 double share = (double) placed / region.room().maxParts();
@@ -276,7 +276,7 @@ public final class ReportBuilder {
             String path = format(region.resistanceOhms(), RESISTANCE) + " + "
                     + format(region.inductanceH(), breakwater.units.Quantity.INDUCTANCE);
             String room = region.room().maxParts() >= 0 ? placed + " parts of " + region.room().maxParts()
-                    : placed + " parts (no limit)";
+                    : placed + " part" + Texts.plural(placed) + " (no limit)";
             boxes.add(new breakwater.report.chart.PlacementChart.Box(region.name(), path, room, used, lines));
         }
         String svg = breakwater.report.chart.PlacementChart.svg(
