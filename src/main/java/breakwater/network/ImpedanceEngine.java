@@ -39,6 +39,7 @@ public final class ImpedanceEngine {
     private final double[][] fixedRegionIm;
     private final double[] scratchRe;
     private final double[] scratchIm;
+    private final double[] pathSum = new double[2];
 
     /**
      * @param fixedNetwork the network with an empty bank (regulator, plane, package, die)
@@ -184,20 +185,15 @@ public final class ImpedanceEngine {
                         }
                     }
                 }
+                pathSum[0] = yr;
+                pathSum[1] = yi;
                 for (int r = 0; r < regionCount; r++) {
-                    double gr = scratchRe[r];
-                    double gi = scratchIm[r];
-                    if (gr == 0.0 && gi == 0.0) {
-                        continue;
+                    if (scratchRe[r] != 0.0 || scratchIm[r] != 0.0) {
+                        RegionPath.addBehindPath(scratchRe[r], scratchIm[r], pathRe[r][k], pathIm[r][k], pathSum);
                     }
-                    double qr = pathRe[r][k];
-                    double qi = pathIm[r][k];
-                    double dr = 1 + gr * qr - gi * qi;
-                    double di = gr * qi + gi * qr;
-                    double md = dr * dr + di * di;
-                    yr += (gr * dr + gi * di) / md;
-                    yi += (gi * dr - gr * di) / md;
                 }
+                yr = pathSum[0];
+                yi = pathSum[1];
             }
             double m = yr * yr + yi * yi;
             double zr = yr / m;

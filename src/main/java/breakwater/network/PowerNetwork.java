@@ -156,13 +156,10 @@ public record PowerNetwork(
                 gr += y[0];
                 gi += y[1];
             }
-            double qr = r.resistanceOhms();
-            double qi = w * r.inductanceH();
-            double dr = 1 + gr * qr - gi * qi;
-            double di = gr * qi + gi * qr;
-            double md = dr * dr + di * di;
-            yr += (gr * dr + gi * di) / md;
-            yi += (gi * dr - gr * di) / md;
+            double[] acc = {yr, yi};
+            RegionPath.addBehindPath(gr, gi, r.resistanceOhms(), w * r.inductanceH(), acc);
+            yr = acc[0];
+            yi = acc[1];
         }
         double zr;
         double zi;

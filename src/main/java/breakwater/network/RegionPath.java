@@ -29,6 +29,18 @@ public record RegionPath(String name, double resistanceOhms, double inductanceH,
         return resistanceOhms == 0.0 && inductanceH == 0.0;
     }
 
+    /**
+     * Adds to {@code acc} (real, imaginary) the admittance that a node of admittance g = gr + j·gi presents
+     * through a series path q = qr + j·qi: y = g / (1 + g·q), written so it stays defined where g = 0.
+     */
+    static void addBehindPath(double gr, double gi, double qr, double qi, double[] acc) {
+        double dr = 1 + gr * qr - gi * qi;
+        double di = gr * qi + gi * qr;
+        double md = dr * dr + di * di;
+        acc[0] += (gr * dr + gi * di) / md;
+        acc[1] += (gi * dr - gr * di) / md;
+    }
+
     /** The same path holding {@code newBranches}. */
     public RegionPath withBranches(List<SeriesBranch> newBranches) {
         return new RegionPath(name, resistanceOhms, inductanceH, newBranches);
