@@ -89,6 +89,24 @@ public final class BankSearch {
         return candidates;
     }
 
+    /**
+     * The search {@code solve} runs: the scenario's candidates for {@code parts}, screened
+     * ({@link Screening}), with their largest counts.
+     */
+    public static BankSearch forScenario(BankEvaluator evaluator, List<Part> parts) {
+        Screening screening = Screening.of(evaluator, parts);
+        BankSearch search = new BankSearch(evaluator, screening.kept(), screening.maxCounts());
+        search.screening = screening;
+        return search;
+    }
+
+    /** What screening left out before this search ({@link #forScenario}); nothing for a search built directly. */
+    public Screening screening() {
+        return screening != null ? screening : Screening.none(candidates, maxCounts);
+    }
+
+    private Screening screening;
+
     /** Asks every solver to stop; {@link #run} then returns the best bank found so far. */
     public void stop() {
         stopRequested.set(true);
@@ -170,7 +188,8 @@ public final class BankSearch {
                 improvements = List.copyOf(history);
             }
             return new SearchResult(candidates.bank(best), pool.judge(best), pool.requests(),
-                    seconds, settings.seed(), settings.solvers(), stopRequested.get(), improvements);
+                    seconds, settings.seed(), settings.solvers(), stopRequested.get(), improvements,
+                    java.util.Optional.ofNullable(screening));
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             throw new IllegalStateException("search interrupted", e);

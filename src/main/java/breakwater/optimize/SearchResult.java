@@ -15,12 +15,21 @@ import breakwater.design.Judgement;
  * @param solvers      solvers that ran
  * @param stoppedEarly whether the user stopped it (Ctrl-C)
  * @param improvements every new best bank over all solvers, in time order
+ * @param screening    what was left out of the candidates before the search, when it was screened
  */
 public record SearchResult(CapacitorBank bank, Judgement judgement, long evaluations, double seconds, long seed,
-                           int solvers, boolean stoppedEarly, java.util.List<Improvement> improvements) {
+                           int solvers, boolean stoppedEarly, java.util.List<Improvement> improvements,
+                           java.util.Optional<Screening> screening) {
 
     public SearchResult {
         improvements = java.util.List.copyOf(improvements);
+        java.util.Objects.requireNonNull(screening, "screening");
+    }
+
+    /** A result of a search over candidates as given (not screened). */
+    public SearchResult(CapacitorBank bank, Judgement judgement, long evaluations, double seconds, long seed,
+                        int solvers, boolean stoppedEarly, java.util.List<Improvement> improvements) {
+        this(bank, judgement, evaluations, seconds, seed, solvers, stoppedEarly, improvements, java.util.Optional.empty());
     }
 
     /** A new best: when (seconds since the start), whether it met the spec, its cost. */

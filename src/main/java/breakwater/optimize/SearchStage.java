@@ -8,8 +8,12 @@ import java.util.Optional;
 /** A step of a run that an engine announces before it starts it (see {@link SearchRunner#announce}). */
 public sealed interface SearchStage {
 
-    /** {@code solve}: one search over {@code parts} candidate parts. */
-    record Solving(int parts, SearchSettings settings) implements SearchStage {
+    /** {@code solve}: one search over the candidates {@code screening} kept. */
+    record Solving(Screening screening, SearchSettings settings) implements SearchStage {
+        /** Candidates searched. */
+        public int parts() {
+            return screening.kept().size();
+        }
     }
 
     /**

@@ -27,11 +27,26 @@ import java.util.Optional;
  */
 public record SolveResult(String footprintName, BankEvaluator judge, Evaluation evaluation, SearchResult search,
                           Optional<DesignMargin.Kept> margin, Optional<MonteCarlo.Result> monteCarlo,
-                          Verdict verdict) {
+                          Verdict verdict, Optional<Reach> reach) {
     public SolveResult {
         Objects.requireNonNull(footprintName, "footprintName");
         Objects.requireNonNull(margin, "margin");
         Objects.requireNonNull(monteCarlo, "monteCarlo");
+        Objects.requireNonNull(reach, "reach");
+    }
+
+    /**
+     * When the search ended without a bank that meets the spec: whether that is proven (no bank of the
+     * searched parts within the board's limits can meet it) or only not reached in the time given.
+     *
+     * @param bound the bound over every bank, empty where none is computed (placement regions)
+     * @param seconds how long the search ran
+     */
+    public record Reach(Optional<breakwater.design.ReachBound> bound, double seconds) {
+        /** Whether the spec is proven out of reach of every bank. */
+        public boolean provenOutOfReach() {
+            return bound.isPresent() && bound.get().outOfReach();
+        }
     }
 
     /**
@@ -45,9 +60,8 @@ public record SolveResult(String footprintName, BankEvaluator judge, Evaluation 
                                     SearchSettings settings, Optional<DesignMargin> margin,
                                     Optional<MonteCarlo.Settings> monteCarlo, SearchRunner runner) throws InputException {
         BankEvaluator searchJudge = margin.isPresent() ? margin.get().narrow(spec) : spec;
-        Candidates candidates = Candidates.forScenario(parts, spec.scenario());
-        BankSearch search = new BankSearch(searchJudge, candidates, MaxCounts.of(candidates, spec.scenario()));
-        runner.announce(new SearchStage.Solving(candidates.size(), settings));
+        BankSearch search = BankSearch.forScenario(searchJudge, parts);
+        runner.announce(new SearchStage.Solving(search.screening(), settings));
         // progress in the search's own terms: with a margin, "allowed" is the narrowed band
         SearchResult result = runner.run(search, searchJudge, settings, CapacitorBank.EMPTY);
         Evaluation e = spec.evaluate(result.bank());
@@ -55,6 +69,11 @@ public record SolveResult(String footprintName, BankEvaluator judge, Evaluation 
         Optional<DesignMargin.Kept> kept = margin.map(m -> m.kept(e));
         Verdict verdict = Verdict.of(e, spec.scenario().requireTarget(),
                 kept.flatMap(DesignMargin.Kept::failure).stream().toList(), MonteCarlo.yieldOf(mc), margin.isPresent());
-        return new SolveResult(footprintName, spec, e, result, kept, mc, verdict);
+        Optional<Reach> reach = Optional.empty();
+        if (!result.judgement().feasible()) {
+            reach = Optional.of(new Reach(breakwater.design.ReachBound.of(searchJudge, search.candidates(),
+                    search.screening().maxCounts()), result.seconds()));
+        }
+        return new SolveResult(footprintName, spec, e, result, kept, mc, verdict, reach);
     }
 }

@@ -21,8 +21,9 @@ public final class ProgressText {
     /** The line announcing a step of a run. */
     public static String stage(SearchStage stage) {
         return switch (stage) {
-            case SearchStage.Solving s -> String.format(Locale.ROOT, "breakwater: searching %d parts for up to %s",
-                    s.parts(), Texts.duration(s.settings().timeLimit())) + solvers(s.settings());
+            case SearchStage.Solving s -> String.format(Locale.ROOT, "breakwater: searching %d parts%s for up to %s",
+                    s.parts(), s.screening().dropped().isEmpty() ? "" : " (" + s.screening().summary() + ")",
+                    Texts.duration(s.settings().timeLimit())) + solvers(s.settings());
             case SearchStage.Trimming t -> String.format(Locale.ROOT, "breakwater: trimming %s (%d parts, cost %s) "
                             + "keeping %s; searching %d parts for up to %s", t.bankName(), t.existing().bank().totalParts(),
                     Texts.money(t.existing().cost().total()), keeping(t), t.parts(),

@@ -182,6 +182,7 @@ public final class ReportBuilder {
             settings.add(List.of("search time", String.format(Locale.ROOT, "%.1f s", sr.seconds())));
             settings.add(List.of("banks evaluated", Long.toString(sr.evaluations())));
             settings.add(List.of("stopped by the user", Boolean.toString(sr.stoppedEarly())));
+            sr.screening().ifPresent(sc -> settings.add(List.of("screening", sc.summary())));
         });
         settings.add(List.of("Breakwater", Optional.ofNullable(ReportBuilder.class.getPackage().getImplementationVersion())
                 .orElse("development build")));

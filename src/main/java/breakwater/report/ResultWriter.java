@@ -99,6 +99,8 @@ public final class ResultWriter {
             run.search().ifPresent(r -> out.printf(Locale.ROOT, "%nSearch     %d banks evaluated in %.1f s by %d "
                             + "solver%s, seed %d%s%n", r.evaluations(), r.seconds(), r.solvers(), Texts.plural(r.solvers()),
                     r.seed(), r.stoppedEarly() ? " (stopped by the user)" : ""));
+            run.search().flatMap(SearchResult::screening).filter(sc -> !sc.dropped().isEmpty())
+                    .ifPresent(sc -> out.printf(Locale.ROOT, "Screening  %s%n", sc.summary()));
             if (!mode.console().isEmpty()) {
                 out.println();
                 out.print(mode.console().endsWith("\n") ? mode.console() : mode.console() + "\n");

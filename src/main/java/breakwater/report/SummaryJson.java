@@ -15,6 +15,7 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.io.IOException;
+import java.util.Locale;
 import java.io.Writer;
 
 /**
@@ -176,6 +177,23 @@ public final class SummaryJson {
         s.put("time_s", r.seconds());
         s.put("evaluations", r.evaluations());
         s.put("stopped_early", r.stoppedEarly());
+        r.screening().ifPresent(sc -> {
+            ObjectNode o = s.putObject("screening");
+            o.put("candidates", sc.considered());
+            o.put("searched", sc.kept().size());
+            ArrayNode out = o.putArray("left_out");
+            for (var d : sc.dropped()) {
+                ObjectNode x = out.addObject();
+                x.put("part", d.part());
+                if (!d.region().isEmpty()) {
+                    x.put("region", d.region());
+                }
+                x.put("reason", d.reason().name().toLowerCase(Locale.ROOT));
+                if (!d.keptAs().isEmpty()) {
+                    x.put("kept_instead", d.keptAs());
+                }
+            }
+        });
     }
 
     /** A bank as an array of {@code {part, count}}. */

@@ -47,6 +47,10 @@ public final class CatalogGenerator {
                 .append("part,description,case,dielectric,capacitance,esr,esl,mount_inductance,cost,voltage_rating,"
                         + "tolerance,dc_bias_retention,max_count\n");
         for (int i = 0; i < parts; i++) {
+            if (i % BULK_EVERY == BULK_EVERY - 1) {
+                bulk(b, i, r);
+                continue;
+            }
             CaseRange c = CASES[r.nextInt(CASES.length)];
             int decades = (int) Math.round(Math.log10(c.maxF() / c.minF()));
             double cap = c.minF() * Math.pow(10, r.nextInt(decades + 1)) * E6[r.nextInt(E6.length)];
@@ -65,6 +69,28 @@ public final class CatalogGenerator {
                     cost, rating, tolerance, retention));
         }
         return b.toString();
+    }
+
+    /** One part in this many is a polymer bulk part (a large catalog holds a few, as a stockroom does). */
+    static final int BULK_EVERY = 32;
+    private static final String[] BULK_CASES = {"B", "D", "7343"};
+    private static final double[] BULK_UF = {47, 100, 150, 220, 330, 470};
+
+    /**
+     * A polymer bulk part: 47 … 470 µF, ESR 5 … 40 mΩ falling with capacitance, ESL 0.8 … 1.6 nH, mounting
+     * 0.8 … 1.2 nH, 20 % tolerance, no DC-bias loss (orders of magnitude from memory, common practice).
+     */
+    private static void bulk(StringBuilder b, int i, SplittableRandom r) {
+        int k = r.nextInt(BULK_CASES.length);
+        String code = BULK_CASES[k];
+        double cap = BULK_UF[r.nextInt(BULK_UF.length)] * 1e-6;
+        double esr = 12e-3 * Math.sqrt(220e-6 / cap) * (0.6 + 0.8 * r.nextDouble());
+        double esl = (0.8 + 0.4 * k) * 1e-9 * (0.9 + 0.2 * r.nextDouble());
+        double mount = (0.8 + 0.2 * k) * 1e-9;
+        double cost = (0.08 + 0.0006 * cap * 1e6) * (0.7 + 0.6 * r.nextDouble());
+        double rating = new double[] {2.5, 4, 6.3, 10, 16}[r.nextInt(5)];
+        b.append(String.format(Locale.ROOT, "G%05d-%s-polymer,\"generated polymer %s\",%s,polymer,%.4g,%.4g,%.4g,%.4g,%.5f,%s,20 %%,1.000,%n",
+                i, code, code, code, cap, esr, esl, mount, cost, rating));
     }
 
     /** Writes {@link #catalog(int, long)} to {@code file}. */
