@@ -40,6 +40,8 @@ public final class ImpedanceEngine {
     private final double[] scratchRe;
     private final double[] scratchIm;
     private final double[] pathSum = new double[2];
+    /** Scratch: the candidates in use in the bank being swept. */
+    private final int[] used;
 
     /**
      * @param fixedNetwork the network with an empty bank (regulator, plane, package, die)
@@ -79,6 +81,7 @@ public final class ImpedanceEngine {
         this.regionCount = regions.size();
         this.grid = grid;
         this.parts = unitParts.size();
+        this.used = new int[parts];
         this.hasPackage = fixedNetwork.hasPackage();
         int n = grid.size();
         fixedBoardRe = new double[n];
@@ -156,25 +159,32 @@ public final class ImpedanceEngine {
             throw new IllegalArgumentException("expected " + parts + " counts, got " + counts.length);
         }
         int n = grid.size();
+        // only the candidates in use: a bank holds a handful of a large catalog's parts
+        int inUse = 0;
+        for (int p = 0; p < parts; p++) {
+            if (counts[p] != 0) {
+                used[inUse++] = p;
+            }
+        }
         for (int k = 0; k < n; k++) {
             double yr = fixedBoardRe[k];
             double yi = fixedBoardIm[k];
             if (regionCount == 0) {
-                for (int p = 0; p < parts; p++) {
+                for (int u = 0; u < inUse; u++) {
+                    int p = used[u];
                     int c = counts[p];
-                    if (c != 0) {
-                        yr += c * unitRe[p][k];
-                        yi += c * unitIm[p][k];
-                    }
+                    yr += c * unitRe[p][k];
+                    yi += c * unitIm[p][k];
                 }
             } else {
                 for (int r = 0; r < regionCount; r++) {
                     scratchRe[r] = fixedRegionRe[r][k];
                     scratchIm[r] = fixedRegionIm[r][k];
                 }
-                for (int p = 0; p < parts; p++) {
+                for (int u = 0; u < inUse; u++) {
+                    int p = used[u];
                     int c = counts[p];
-                    if (c != 0) {
+                    {
                         int r = regionOf[p];
                         if (r < 0) {
                             yr += c * unitRe[p][k];

@@ -143,12 +143,26 @@ public final class BankSearch {
             // the start phase keeps the time limit and the stop request too, ending with what it has
             long deadline = startNanos + settings.timeLimit().toNanos();
             BooleanSupplier goOn = () -> !stopRequested.get() && System.nanoTime() < deadline;
-            int[] grown = ImpedanceShaping.start(pool.evaluator(), candidates, maxCounts, given,
-                    c -> pool.judge(c).feasible(), goOn, startTrials);
-            int[] fresh = ImpedanceShaping.start(pool.evaluator(), candidates, maxCounts, new int[given.length],
-                    c -> pool.judge(c).feasible(), goOn, startTrials);
-            shaped = ScoreLevels.of(pool.judge(fresh)).compareTo(ScoreLevels.of(pool.judge(grown))) > 0
-                    ? fresh : grown;
+            // three shapes: grown from the given bank (when there is one), and from scratch by each rule
+            List<int[]> shapes = new ArrayList<>();
+            boolean givenEmpty = java.util.Arrays.stream(given).allMatch(c -> c == 0);
+            if (!givenEmpty) {
+                shapes.add(ImpedanceShaping.start(pool.evaluator(), candidates, maxCounts, given,
+                        c -> pool.judge(c).feasible(), goOn, startTrials));
+            }
+            for (ImpedanceShaping.Rule rule : ImpedanceShaping.Rule.values()) {
+                int[] fresh = ImpedanceShaping.start(pool.evaluator(), candidates, maxCounts, new int[given.length],
+                        c -> pool.judge(c).feasible(), goOn, startTrials, rule);
+                shapes.add(fresh);
+                if (pool.judge(fresh).feasible()) {
+                    break; // a passing start: the search makes it cheaper
+                }
+            }
+            for (int[] c : shapes) {
+                if (shaped == given || ScoreLevels.of(pool.judge(c)).compareTo(ScoreLevels.of(pool.judge(shaped))) > 0) {
+                    shaped = c;
+                }
+            }
         }
         int[] startCounts = shaped;
         offer(startCounts);
@@ -315,11 +329,18 @@ public final class BankSearch {
         } else {
             termination.setUnimprovedSpentLimit(settings.unimprovedLimit());
         }
+        List<ai.timefold.solver.core.config.heuristic.selector.move.MoveSelectorConfig<?>> selectors = new ArrayList<>();
+        selectors.add(new ChangeMoveSelectorConfig().withFixedProbabilityWeight(1.0));
+        if (candidates.size() <= JudgePool.SHORTLIST_ABOVE) {
+            // Timefold's swap works out, per phase, which counts each pair of candidates can exchange: work
+            // that grows with the square of the candidates (seconds for a catalog of thousands); the
+            // "move parts between types" moves of CountMoves cover the same ground there
+            selectors.add(new SwapMoveSelectorConfig().withFixedProbabilityWeight(1.0));
+        }
+        selectors.add(new MoveListFactoryConfig().withMoveListFactoryClass(CountMoves.class)
+                .withCacheType(SelectionCacheType.STEP).withFixedProbabilityWeight(8.0));
         UnionMoveSelectorConfig moves = new UnionMoveSelectorConfig().withMoveSelectors(
-                new ChangeMoveSelectorConfig().withFixedProbabilityWeight(1.0),
-                new SwapMoveSelectorConfig().withFixedProbabilityWeight(1.0),
-                new MoveListFactoryConfig().withMoveListFactoryClass(CountMoves.class)
-                        .withCacheType(SelectionCacheType.STEP).withFixedProbabilityWeight(8.0));
+                selectors.toArray(new ai.timefold.solver.core.config.heuristic.selector.move.MoveSelectorConfig<?>[0]));
         return new SolverConfig()
                 .withSolutionClass(BankPlan.class)
                 .withEntityClasses(PartCount.class)

@@ -24,6 +24,10 @@ import java.util.SequencedCollection;
  *   <li><b>relocate</b> (with placement regions): every part of one type moved to another region, as many
  *       as fit there.</li>
  * </ul>
+ * With a large catalog (more than {@link JudgePool#SHORTLIST_ABOVE} candidates) a part not in use enters
+ * only from the shortlist of promising ones ({@link JudgePool#shortlist}), and a type in use may be
+ * replaced outright by one of them (<b>replace by a promising part</b>): the moves per step then grow with
+ * the parts in use, not with the catalog, and the distinct-part limit is not a wall.
  * The list is rebuilt every step from the current counts (see {@link BankSearch}), so every move changes
  * something.
  */
@@ -35,8 +39,26 @@ public final class CountMoves implements MoveListFactory<BankPlan> {
         // an accepted no-op would end a local-search step without changing anything.
         List<Move<BankPlan>> moves = new ArrayList<>();
         List<PartCount> all = plan.getCounts();
+        // with a large catalog, parts not in use enter only from the shortlist of promising ones, so the
+        // moves per step grow with the parts in use, not with the catalog
+        boolean narrow = plan.getJudges().shortlists();
+        boolean[] promising = new boolean[all.size()];
+        if (narrow) {
+            int[] max = new int[all.size()];
+            for (PartCount pc : all) {
+                max[pc.getIndex()] = pc.getMaxCount();
+            }
+            for (int i : plan.getJudges().shortlist(plan.countVector(), max)) {
+                promising[i] = true;
+            }
+        } else {
+            java.util.Arrays.fill(promising, true);
+        }
         for (PartCount pc : all) {
             int now = pc.countOrZero();
+            if (now == 0 && !promising[pc.getIndex()]) {
+                continue;
+            }
             for (int delta : new int[] {1, -1, 3, -3}) {
                 int next = Math.max(0, Math.min(pc.getMaxCount(), now + delta));
                 if (next != now && (delta > 0 || Math.abs(delta) == 1 || next != 0 || now > 3)) {
@@ -61,6 +83,16 @@ public final class CountMoves implements MoveListFactory<BankPlan> {
             }
             for (PartCount b : all) {
                 int nb = b.countOrZero();
+                if (nb == 0 && !promising[b.getIndex()]) {
+                    continue;
+                }
+                if (narrow && nb == 0 && a != b) {
+                    // a type in use replaced by a promising new one, all its parts (or as many as fit)
+                    int moved = Math.min(na, b.getMaxCount());
+                    if (moved > 0) {
+                        moves.add(new SetCounts(List.of(a, b), new int[] {na - moved, moved}, "replace-by-promising"));
+                    }
+                }
                 if (a != b && nb < b.getMaxCount()) {
                     moves.add(new SetCounts(List.of(a, b), new int[] {na - 1, nb + 1}, "transfer"));
                 }

@@ -41,7 +41,16 @@ public final class GreedyFill implements PhaseCommand<BankPlan> {
             int bestValue = 0;
             double bestRatio = 0;
             BendableScore bestScore = null;
+            // with a large catalog only a shortlist (the parts in use and the most promising others) is
+            // judged in full per step; a small catalog is tried whole
+            PartCount[] byIndex = new PartCount[plan.getCounts().size()];
+            int[] maxCounts = new int[byIndex.length];
             for (PartCount pc : plan.getCounts()) {
+                byIndex[pc.getIndex()] = pc;
+                maxCounts[pc.getIndex()] = pc.getMaxCount();
+            }
+            for (int index : plan.getJudges().shortlist(plan.countVector(), maxCounts)) {
+                PartCount pc = byIndex[index];
                 int now = pc.countOrZero();
                 if (now >= pc.getMaxCount()) {
                     continue;

@@ -3,7 +3,6 @@ package breakwater.optimize;
 import breakwater.design.Candidates;
 import breakwater.catalog.Part;
 import breakwater.design.BankEvaluator;
-import breakwater.design.BoardCheck;
 import breakwater.design.CapacitorBank;
 import breakwater.network.FrequencyGrid;
 import breakwater.network.ImpedanceEngine;
@@ -50,6 +49,24 @@ final class ImpedanceShaping {
      */
     static int[] start(BankEvaluator evaluator, Candidates candidates, int[] maxCounts, int[] from,
                        Predicate<int[]> meetsSpec, BooleanSupplier goOn, LongAdder trials) {
+        return start(evaluator, candidates, maxCounts, from, meetsSpec, goOn, trials, Rule.PER_COST);
+    }
+
+    /** How a part to add is chosen. */
+    enum Rule {
+        /** the most area removed per unit of cost (cheap parts first: the cheapest bank's shape) */
+        PER_COST,
+        /**
+         * the most area removed per part (the strongest part first): where the board's room, not the
+         * price, is what runs out, a per-cost fill spends the room on small cheap parts and never reaches
+         * the low frequencies that need bulk
+         */
+        PER_PART
+    }
+
+    /** As above, choosing each part to add by {@code rule}. */
+    static int[] start(BankEvaluator evaluator, Candidates candidates, int[] maxCounts, int[] from,
+                       Predicate<int[]> meetsSpec, BooleanSupplier goOn, LongAdder trials, Rule rule) {
         Scenario s = evaluator.scenario();
         List<SeriesBranch> units = new ArrayList<>();
         for (Part p : candidates.parts()) {
@@ -67,12 +84,15 @@ final class ImpedanceShaping {
             unitCost[i] = candidates.part(i).unitCost() + s.cost().placementPerPart();
         }
         int[] counts = from.clone();
+        RoomCount room = new RoomCount(s, candidates);
+        room.reset(counts);
         double alpha = 1.0;
         for (int round = 0; round < MAX_ROUNDS; round++) {
             double line = alpha * s.rail().targetImpedanceOhms();
             double area = area(engine, counts, re, im, mag, line);
             while (area > 0) {
                 int best = -1;
+                int bestBlock = 1;
                 double bestGain = 0;
                 double bestArea = area;
                 for (int p = 0; p < counts.length; p++) {
@@ -83,22 +103,33 @@ final class ImpedanceShaping {
                         return counts;
                     }
                     trials.increment();
-                    counts[p]++;
-                    boolean fits = BoardCheck.violations(candidates.bank(counts), s.board(), s.regions()).isEmpty();
-                    double a = fits ? area(engine, counts, re, im, mag, line) : area;
-                    counts[p]--;
+                    // per part, a new type is tried as a block (a quarter of its largest count): one small
+                    // part alone removes little, and the board's distinct-part limit is spent per type
+                    int k = rule == Rule.PER_PART && counts[p] == 0 ? Math.max(1, (maxCounts[p] + 3) / 4) : 1;
+                    if (!room.fits(p, k)) {
+                        if (k == 1 || !room.fits(p, k = 1)) {
+                            continue;
+                        }
+                    }
+                    counts[p] += k;
+                    double a = area(engine, counts, re, im, mag, line);
+                    counts[p] -= k;
                     double addedCost = unitCost[p] + (counts[p] == 0 ? s.cost().perLineItem() : 0);
-                    double gain = (area - a) / Math.max(addedCost, 1e-9);
+                    double gain = rule == Rule.PER_PART ? (area - a) / k : (area - a) / Math.max(addedCost, 1e-9);
                     if (a < area && gain > bestGain) {
                         bestGain = gain;
                         best = p;
                         bestArea = a;
+                        bestBlock = k;
                     }
                 }
                 if (best < 0) {
                     break; // no single part lowers |Z| further within the board limits
                 }
-                counts[best]++;
+                counts[best] += bestBlock;
+                for (int k = 0; k < bestBlock; k++) {
+                    room.add(best);
+                }
                 area = bestArea;
             }
             if (!goOn.getAsBoolean() || meetsSpec.test(counts)) {

@@ -81,6 +81,109 @@ public final class JudgePool {
         return j;
     }
 
+    /** Above this many candidates, construction tries only a shortlist of them per step ({@link #shortlist}). */
+    static final int SHORTLIST_ABOVE = 48;
+    /** Candidates not yet in use that a shortlist holds, half ranked per cost and half per part. */
+    static final int SHORTLIST_NEW = 24;
+    private final ThreadLocal<Shortlister> shortlisters = ThreadLocal.withInitial(Shortlister::new);
+
+    /**
+     * The candidates worth a full judgement when parts are added to {@code counts}: those in use, and
+     * the {@link #SHORTLIST_NEW} others whose single addition lowers the impedance peaks most, Σ (|Z|/Z_t)⁴
+     * over the band (a cheap proxy on a coarse grid; half ranked per unit of added cost, half per part).
+     * Every candidate when there are at most {@link #SHORTLIST_ABOVE}. Ascending candidate order. Safe from
+     * any thread (one ranking engine per thread).
+     */
+    public int[] shortlist(int[] counts, int[] maxCounts) {
+        int n = candidates.size();
+        if (n <= SHORTLIST_ABOVE) {
+            return java.util.stream.IntStream.range(0, n).toArray();
+        }
+        return shortlisters.get().shortlist(counts, maxCounts);
+    }
+
+    /** Whether {@link #shortlist} narrows the candidates (a large catalog). */
+    public boolean shortlists() {
+        return candidates.size() > SHORTLIST_ABOVE;
+    }
+
+    /** One thread's ranking engine for {@link #shortlist}. */
+    private final class Shortlister {
+        private final breakwater.network.ImpedanceEngine engine;
+        private final double[] re;
+        private final double[] im;
+
+        Shortlister() {
+            var s = evaluator.scenario();
+            List<breakwater.network.SeriesBranch> units = new java.util.ArrayList<>();
+            for (Part p : candidates.parts()) {
+                units.add(breakwater.network.PartBranches.single(p, evaluator.footprint()));
+            }
+            var grid = breakwater.network.FrequencyGrid.logarithmic(s.band().fromHz(), s.band().toHz(), 20);
+            int[] regionOf = candidates.regions().stream().mapToInt(r -> s.regionNames().indexOf(r)).toArray();
+            engine = new breakwater.network.ImpedanceEngine(
+                    breakwater.network.NetworkBuilder.build(s, List.of(), evaluator.footprint()), units, regionOf, grid);
+            re = new double[grid.size()];
+            im = new double[grid.size()];
+        }
+
+        int[] shortlist(int[] counts, int[] maxCounts) {
+            var s = evaluator.scenario();
+            int n = candidates.size();
+            double zt = s.rail().targetImpedanceOhms();
+            int[] c = counts.clone();
+            double base = peaks(c, zt);
+            double[] perCost = new double[n];
+            double[] perPart = new double[n];
+            java.util.Arrays.fill(perCost, Double.NEGATIVE_INFINITY);
+            java.util.Arrays.fill(perPart, Double.NEGATIVE_INFINITY);
+            boolean[] keep = new boolean[n];
+            for (int i = 0; i < n; i++) {
+                if (c[i] > 0) {
+                    keep[i] = true;
+                    continue;
+                }
+                if (maxCounts[i] <= 0) {
+                    continue;
+                }
+                c[i] = 1;
+                double gain = base - peaks(c, zt);
+                c[i] = 0;
+                double cost = candidates.part(i).unitCost() + s.cost().placementPerPart() + s.cost().perLineItem();
+                perPart[i] = gain;
+                perCost[i] = gain / Math.max(cost, 1e-9);
+            }
+            for (double[] rank : new double[][] {perCost, perPart}) {
+                Integer[] order = new Integer[n];
+                for (int i = 0; i < n; i++) {
+                    order[i] = i;
+                }
+                java.util.Arrays.sort(order, (a, b) -> Double.compare(rank[b], rank[a]));
+                for (int k = 0, taken = 0; k < n && taken < SHORTLIST_NEW / 2; k++) {
+                    int i = order[k];
+                    if (rank[i] == Double.NEGATIVE_INFINITY) {
+                        break;
+                    }
+                    if (!keep[i]) {
+                        keep[i] = true;
+                        taken++;
+                    }
+                }
+            }
+            return java.util.stream.IntStream.range(0, n).filter(i -> keep[i]).toArray();
+        }
+
+        private double peaks(int[] counts, double zt) {
+            engine.sweep(counts, re, im);
+            double sum = 0;
+            for (int k = 0; k < re.length; k++) {
+                double m2 = (re[k] * re[k] + im[k] * im[k]) / (zt * zt);
+                sum += m2 * m2;
+            }
+            return sum;
+        }
+    }
+
     /** Judges {@code counts} afresh, bypassing the memo (the reference for assert-mode checks). */
     public Judgement judgeFresh(int[] counts) {
         return new CandidateJudge(evaluator, candidates).judge(counts);
