@@ -91,7 +91,7 @@ public record ReachBound(boolean outOfReach, double frequencyHz, double leastImp
         double[] yIm = new double[n];
         double[] y = new double[2];
         double[] v = new double[n];
-        Integer[] order = new Integer[n];
+        long[] keys = new long[n];
         double[] vx = new double[DIRECTIONS];
         double[] vy = new double[DIRECTIONS];
         double[] h = new double[DIRECTIONS];
@@ -119,18 +119,26 @@ public record ReachBound(boolean outOfReach, double frequencyHz, double leastImp
                         }
                     }
                 } else {
+                    // the positive values, largest first: sorted as primitive keys (the value's float bits
+                    // above the index; a positive float's bits order as the float does)
+                    int m = 0;
                     for (int i = 0; i < n; i++) {
                         v[i] = yRe[i] * c + yIm[i] * sn;
-                        order[i] = i;
+                        if (v[i] > 0 && maxCounts[i] > 0) {
+                            keys[m++] = ((long) Float.floatToIntBits((float) v[i]) << 32) | i;
+                        }
                     }
-                    Arrays.sort(order, (a, b) -> Double.compare(v[b], v[a]));
+                    Arrays.sort(keys, 0, m);
                     long left = budget;
-                    for (int idx = 0; idx < n && left > 0 && v[order[idx]] > 0; idx++) {
-                        int i = order[idx];
+                    for (int idx = m - 1; idx >= 0 && left > 0; idx--) {
+                        int i = (int) keys[idx];
                         long take = Math.min(left, maxCounts[i]);
                         sum += take * v[i];
                         left -= take;
                     }
+                    // the float order may swap values that agree to 1e-7: the sum can fall short of the
+                    // greatest by less than that share, so widen it (a larger polygon keeps the bound a bound)
+                    sum *= 1 + 1e-6;
                 }
                 h[k] = sum;
             }

@@ -82,7 +82,7 @@ public final class JudgePool {
     }
 
     /** Above this many candidates, construction tries only a shortlist of them per step ({@link #shortlist}). */
-    static final int SHORTLIST_ABOVE = 48;
+    static final int SHORTLIST_ABOVE = Integer.getInteger("bw.shortlistAbove", 48);
     /** Candidates not yet in use that a shortlist holds, half ranked per cost and half per part. */
     static final int SHORTLIST_NEW = 24;
     private final ThreadLocal<Shortlister> shortlisters = ThreadLocal.withInitial(Shortlister::new);
