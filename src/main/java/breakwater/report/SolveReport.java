@@ -37,7 +37,7 @@ public final class SolveReport {
     static ModeOutput reach(SolveResult.Reach reach) {
         String words = reachWords(reach);
         ReportModel.Section section = ReportModel.Section.text("Why no bank meets the spec",
-                Character.toUpperCase(words.charAt(0)) + words.substring(1));
+                Character.toUpperCase(words.charAt(0)) + words.substring(1)).asLead();
         return new ModeOutput(Texts.wrap("Reach      " + words, " ".repeat(11)).stripTrailing(), summary -> {
             var o = summary.putObject("reach");
             o.put("proven_out_of_reach", reach.provenOutOfReach());
