@@ -60,8 +60,6 @@ public record CompareResult(List<Row> rows, Row primary, boolean givenBank, Sear
                                         Optional<String> bankName, List<Part> parts, SearchSettings all,
                                         SearchRunner runner) throws InputException {
         SearchSettings each = all.split(names.size());
-        Candidates candidates = Candidates.forScenario(parts, scenario);
-        int[] max = MaxCounts.of(candidates, scenario);
         runner.announce(new SearchStage.Comparing(names, given.isPresent() ? bankName : Optional.empty(), all, each));
         List<Row> rows = new ArrayList<>();
         for (String name : names) {
@@ -74,7 +72,8 @@ public record CompareResult(List<Row> rows, Row primary, boolean givenBank, Sear
                 bank = CapacitorBank.EMPTY;
             } else {
                 runner.announce(new SearchStage.FootprintSearch(name));
-                SearchResult r = runner.run(new BankSearch(ev, candidates, max), ev, each, CapacitorBank.EMPTY);
+                // screened per footprint: twins are told apart by their branch under that footprint
+                SearchResult r = runner.run(BankSearch.forScenario(ev, parts), ev, each, CapacitorBank.EMPTY);
                 result = Optional.of(r);
                 bank = r.bank();
             }

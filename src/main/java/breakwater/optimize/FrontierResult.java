@@ -30,10 +30,10 @@ public record FrontierResult(String footprintName, BankEvaluator judge, Evaluati
     public static FrontierResult frontier(BankEvaluator spec, String footprintName, List<Part> parts, SearchSettings all, int points,
                                           SearchRunner runner) {
         SearchSettings each = all.split(points + 1);
-        Candidates candidates = Candidates.forScenario(parts, spec.scenario());
+        Screening screening = Screening.of(spec, parts);
         runner.announce(new SearchStage.Frontier(points, all, each));
         int[] step = {0};
-        ExcursionFrontier.Result f = ExcursionFrontier.run(spec, candidates, MaxCounts.of(candidates, spec.scenario()),
+        ExcursionFrontier.Result f = ExcursionFrontier.run(spec, screening.kept(), screening.maxCounts(),
                 each, points, (search, judge, settings, start) -> {
                     runner.announce(step[0] == 0 ? new SearchStage.TightestSearch()
                             : new SearchStage.LimitSearch(step[0], points));
