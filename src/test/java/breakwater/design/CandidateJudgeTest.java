@@ -48,8 +48,12 @@ class CandidateJudgeTest {
             counts[i] = Math.max(0, counts[i] + rnd.nextInt(5) - 2);
             Judgement a = warm.judge(counts);
             Judgement b = cold.judge(counts);
-            assertThat(a.droopV()).isCloseTo(b.droopV(), within(1e-12));
-            assertThat(a.overshootV()).isCloseTo(b.overshootV(), within(1e-12));
+            if (a.figuresExact() && b.figuresExact()) {
+                assertThat(a.droopV()).isCloseTo(b.droopV(), within(1e-12));
+                assertThat(a.overshootV()).isCloseTo(b.overshootV(), within(1e-12));
+            }
+            assertThat(a.droopExcessV()).isCloseTo(b.droopExcessV(), within(1e-12));
+            assertThat(a.overshootExcessV()).isCloseTo(b.overshootExcessV(), within(1e-12));
         }
         assertThat(cold.modelStarts().warmStarts()).isZero();
         assertThat(warm.modelStarts().models()).isEqualTo(200);
@@ -77,10 +81,18 @@ class CandidateJudgeTest {
             }
             Judgement j = judge.judge(counts);
             Evaluation e = ev.evaluate(CapacitorBank.of(PARTS, counts));
-            // the worst case is the same exact computation: equal to rounding
-            assertThat(j.droopV()).isCloseTo(e.figures().droopV(), within(1e-12));
-            assertThat(j.overshootV()).isCloseTo(e.figures().overshootV(), within(1e-12));
+            if (j.figuresExact()) {
+                // the worst case is the same exact computation: equal to rounding
+                assertThat(j.droopV()).isCloseTo(e.figures().droopV(), within(1e-12));
+                assertThat(j.overshootV()).isCloseTo(e.figures().overshootV(), within(1e-12));
+            } else {
+                // settled by a bound: the bank passes, and the figures are upper bounds of the exact ones
+                assertThat(e.figures().passes()).isTrue();
+                assertThat(j.droopV()).isGreaterThanOrEqualTo(e.figures().droopV());
+                assertThat(j.overshootV()).isGreaterThanOrEqualTo(e.figures().overshootV());
+            }
             assertThat(j.droopExcessV()).isCloseTo(e.figures().droopExcessV(), within(1e-12));
+            assertThat(j.overshootExcessV()).isCloseTo(e.figures().overshootExcessV(), within(1e-12));
             assertThat(j.costTotal()).isCloseTo(e.cost().total(), within(1e-12));
             assertThat(j.totalParts()).isEqualTo(e.bank().totalParts());
             int excess = e.board().stream().mapToInt(BoardCheck.Violation::excess).sum();
