@@ -61,17 +61,58 @@ public final class CandidateJudge {
     private final boolean[] partUsed;
     private long unjudged;
     /**
-     * The last model built for each set of distinct parts in use (least recently used dropped): the next
-     * bank with the same parts starts its pole search there ({@link PoleResidueModel#near}).
+     * The last models built for each set of distinct parts in use (sets least recently used dropped): the
+     * next bank with the same parts starts its pole search from the one whose counts are nearest
+     * ({@link PoleResidueModel#near}).
      */
-    private final java.util.LinkedHashMap<java.util.BitSet, PoleResidueModel> recentModels =
+    private final java.util.LinkedHashMap<java.util.BitSet, RecentModels> recentModels =
             new java.util.LinkedHashMap<>(64, 0.75f, true) {
                 @Override
-                protected boolean removeEldestEntry(java.util.Map.Entry<java.util.BitSet, PoleResidueModel> eldest) {
+                protected boolean removeEldestEntry(java.util.Map.Entry<java.util.BitSet, RecentModels> eldest) {
                     return size() > RECENT_MODELS;
                 }
             };
     static final int RECENT_MODELS = 256;
+    /**
+     * Models kept per set of parts. A search walks back and forth among neighbours; the nearest of the last
+     * few is a closer start than the last one alone after a longer jump (Newton's method from a start too
+     * far away may miss a zero, and the warm start then falls back to the eigenvalue search).
+     */
+    static final int MODELS_PER_SET = 4;
+
+    /** The last {@link #MODELS_PER_SET} models of one set of parts, with the counts they were built for. */
+    private static final class RecentModels {
+        final int[][] counts = new int[MODELS_PER_SET][];
+        final PoleResidueModel[] models = new PoleResidueModel[MODELS_PER_SET];
+        int next;
+
+        /** The model whose counts are nearest to {@code c} (sum of count differences; the latest on ties). */
+        PoleResidueModel nearest(int[] c) {
+            PoleResidueModel best = null;
+            long bestDistance = Long.MAX_VALUE;
+            for (int age = 0; age < MODELS_PER_SET; age++) {
+                int slot = Math.floorMod(next - 1 - age, MODELS_PER_SET);
+                if (models[slot] == null) {
+                    break;
+                }
+                long d = 0;
+                for (int i = 0; i < c.length; i++) {
+                    d += Math.abs(c[i] - counts[slot][i]);
+                }
+                if (d < bestDistance) {
+                    bestDistance = d;
+                    best = models[slot];
+                }
+            }
+            return best;
+        }
+
+        void add(int[] c, PoleResidueModel model) {
+            counts[next] = c.clone();
+            models[next] = model;
+            next = (next + 1) % MODELS_PER_SET;
+        }
+    }
     private final boolean warmStart;
     private long models;
     private long warmStarts;
@@ -321,9 +362,14 @@ public final class CandidateJudge {
         WorstCaseVolts wc;
         boolean exact = true;
         try {
-            PoleResidueModel near = warmStart ? recentModels.get(used) : null;
+            RecentModels recent = recentModels.get(used);
+            PoleResidueModel near = warmStart && recent != null ? recent.nearest(counts) : null;
             PoleResidueModel model = near != null ? near.near(network) : PoleResidueModel.of(network);
-            recentModels.put(used, model);
+            if (recent == null) {
+                recent = new RecentModels();
+                recentModels.put(used, recent);
+            }
+            recent.add(counts, model);
             models++;
             if (model.warmStarted()) {
                 warmStarts++;
