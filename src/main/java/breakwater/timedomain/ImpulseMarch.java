@@ -117,10 +117,12 @@ final class ImpulseMarch {
     private final double[] c1;
     /**
      * Sign tests for long steps, from the last check: h keeps its sign over a span s when
-     * |h| &gt; splitAmp[j] + splitSlope[j]·s for some j (see {@link #run}).
+     * |h| &gt; splitAmp[j] + splitSlope[j]·s for some j (see {@link #run}), splitSlope being the bound on
+     * the slope of all but the j fastest modes.
      */
     private final double[] splitAmp = new double[SPLITS];
-    private final double[] splitSlope = new double[SPLITS];
+    /** 1/(splitSlope[j]·dt): the span in steps over which the slope of the rest can move h by 1. */
+    private final double[] splitStepsPerSlope = new double[SPLITS];
     private final double[] b0;
     private final double[] zr;
     private final double[] zi;
@@ -227,14 +229,12 @@ final class ImpulseMarch {
         double fastest = -1;
         double dt = 0;
         int sinceCheck = CHECK_EVERY;
-        double slopeBound = 0;
         while (true) {
             if (sinceCheck >= CHECK_EVERY) {
                 sinceCheck = 0;
                 // tail bounds |w r| e^{Re(p) t}/|Re p|; drop dead modes; stop when the tail is negligible
                 double tail = 0;
                 bigH = 0;
-                slopeBound = 0;
                 for (int k = na - 1; k >= 0; k--) {
                     // |w r e^{pt}|/|Re p| from the mode's current value (equals b0·e^{Re p·t})
                     double bk = Math.sqrt(zr[k] * zr[k] + zi[k] * zi[k]) * decay[k];
@@ -244,7 +244,6 @@ final class ImpulseMarch {
                     }
                     bound[k] = bk;
                     tail += bk;
-                    slopeBound += bk * c1[k];
                     bigH += zr[k] * ipr[k] - zi[k] * ipi[k];
                 }
                 // the split sign tests: twice the amplitudes of the j fastest modes, the slopes of the rest
@@ -255,7 +254,7 @@ final class ImpulseMarch {
                         slope += bound[k] * c1[k];
                     }
                     splitAmp[j] = 2 * amp;
-                    splitSlope[j] = slope;
+                    splitStepsPerSlope[j] = slope; // divided into 1/(slope·dt) once dt is known, below
                     if (j < na) {
                         amp += bound[j] * -pr[j];
                     }
@@ -280,24 +279,25 @@ final class ImpulseMarch {
                         }
                     }
                 }
+                for (int j = 0; j < SPLITS; j++) {
+                    splitStepsPerSlope[j] = 1 / (splitStepsPerSlope[j] * dt);
+                }
             }
             sinceCheck++;
             // h keeps its sign over the next 2^l steps if, for a split j of the modes into the j fastest
             // (F) and the rest (R), |h| > 2·Σ_F |w r e^{pt}| + span·Σ_R |w r e^{pt}||p|: |F| stays below its
             // sum and R moves by at most span·max|R'| (each |w r e^{pt}| only decays), so
             // |h(t + u)| ≥ |h(t)| − 2|F|max − u·max|R'| > 0; j = 0 is the plain slope bound. Those steps are
-            // taken at once
+            // taken at once; the longest such span, in steps, is max_j (|h| − amp_j)/(slope_j·dt)
             int level = 0;
             double absH = Math.abs(h);
-            while (level < LEVELS - 1) {
-                double span = dt * (1 << (level + 1));
-                boolean keeps = false;
-                for (int j = 0; j < SPLITS && !keeps; j++) {
-                    keeps = absH > splitAmp[j] + splitSlope[j] * span;
+            double steps = 0;
+            for (int j = 0; j < SPLITS; j++) {
+                if (absH > splitAmp[j]) {
+                    steps = Math.max(steps, (absH - splitAmp[j]) * splitStepsPerSlope[j]);
                 }
-                if (!keeps) {
-                    break;
-                }
+            }
+            while (level < LEVELS - 1 && (2 << level) < steps) {
                 level++;
             }
             double[] erl = er[level];
