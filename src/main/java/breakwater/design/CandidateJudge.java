@@ -422,8 +422,12 @@ public final class CandidateJudge {
             byIdeal = volts(dcOhms, WorstCaseBounds.idealEdges(model));
         } catch (breakwater.timedomain.UnboundedWorstCaseException e) {
             throw new IllegalStateException("finite direct term checked above", e);
+        } catch (breakwater.timedomain.ModelException e) {
+            // the march's own identity check failed: no bound, and the exact slew-limited computation,
+            // which does not use the march, decides as it would without bounds
+            byIdeal = null;
         }
-        if (byIdeal.passes()) {
+        if (byIdeal != null && byIdeal.passes()) {
             passedByIdealEdges++;
             idealSkip = 0;
             return byIdeal;
