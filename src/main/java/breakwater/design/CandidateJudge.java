@@ -11,6 +11,7 @@ import breakwater.network.SeriesBranch;
 import breakwater.scenario.Rail;
 import breakwater.scenario.Scenario;
 import breakwater.timedomain.PoleResidueModel;
+import breakwater.timedomain.WorstCaseBounds;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -21,7 +22,11 @@ import java.util.List;
  * {@link BankEvaluator#evaluate}); flatness is read on a coarser grid over the band only
  * ({@value #POINTS_PER_DECADE} points per decade), with the two highest peaks refined by the full
  * analysis's Brent search when the target is required and near, which is enough to rank banks; the
- * final verdict always comes from a full evaluation. Not thread-safe: one per solver thread.
+ * final verdict always comes from a full evaluation. Cheap bounds settle clear cases first
+ * (docs/search.md#bounds-in-the-judge): a bank whose upper bound stays inside the limits passes without
+ * the exact computation, and its judgement's droop and overshoot are then upper bounds
+ * ({@link Judgement#figuresExact()} false); a failing bank always gets its exact excess.
+ * Not thread-safe: one per solver thread.
  */
 public final class CandidateJudge {
     /** Grid density for the solver's flatness figures. */
@@ -56,20 +61,69 @@ public final class CandidateJudge {
     private final boolean[] partUsed;
     private long unjudged;
     /**
-     * The last model built for each set of distinct parts in use (least recently used dropped): the next
-     * bank with the same parts starts its pole search there ({@link PoleResidueModel#near}).
+     * The last models built for each set of distinct parts in use (sets least recently used dropped): the
+     * next bank with the same parts starts its pole search from the one whose counts are nearest
+     * ({@link PoleResidueModel#near}).
      */
-    private final java.util.LinkedHashMap<java.util.BitSet, PoleResidueModel> recentModels =
+    private final java.util.LinkedHashMap<java.util.BitSet, RecentModels> recentModels =
             new java.util.LinkedHashMap<>(64, 0.75f, true) {
                 @Override
-                protected boolean removeEldestEntry(java.util.Map.Entry<java.util.BitSet, PoleResidueModel> eldest) {
+                protected boolean removeEldestEntry(java.util.Map.Entry<java.util.BitSet, RecentModels> eldest) {
                     return size() > RECENT_MODELS;
                 }
             };
     static final int RECENT_MODELS = 256;
+    /**
+     * Models kept per set of parts. A search walks back and forth among neighbours; the nearest of the last
+     * few is a closer start than the last one alone after a longer jump (Newton's method from a start too
+     * far away may miss a zero, and the warm start then falls back to the eigenvalue search).
+     */
+    static final int MODELS_PER_SET = 4;
+
+    /** The last {@link #MODELS_PER_SET} models of one set of parts, with the counts they were built for. */
+    private static final class RecentModels {
+        final int[][] counts = new int[MODELS_PER_SET][];
+        final PoleResidueModel[] models = new PoleResidueModel[MODELS_PER_SET];
+        int next;
+
+        /** The model whose counts are nearest to {@code c} (sum of count differences; the latest on ties). */
+        PoleResidueModel nearest(int[] c) {
+            PoleResidueModel best = null;
+            long bestDistance = Long.MAX_VALUE;
+            for (int age = 0; age < MODELS_PER_SET; age++) {
+                int slot = Math.floorMod(next - 1 - age, MODELS_PER_SET);
+                if (models[slot] == null) {
+                    break;
+                }
+                long d = 0;
+                for (int i = 0; i < c.length; i++) {
+                    d += Math.abs(c[i] - counts[slot][i]);
+                }
+                if (d < bestDistance) {
+                    bestDistance = d;
+                    best = models[slot];
+                }
+            }
+            return best;
+        }
+
+        void add(int[] c, PoleResidueModel model) {
+            counts[next] = c.clone();
+            models[next] = model;
+            next = (next + 1) % MODELS_PER_SET;
+        }
+    }
     private final boolean warmStart;
     private long models;
     private long warmStarts;
+    private long judgements;
+    private long passedByModelSum;
+    private long passedByIdealEdges;
+    private long failedByImpedance;
+    /** Longest pause, in judgements, of the ideal-edge bound after it failed to settle banks. */
+    static final int IDEAL_SKIP_MAX = 15;
+    private int idealSkip;
+    private int idealWait;
 
     public CandidateJudge(BankEvaluator evaluator, List<Part> candidates) {
         this(evaluator, Candidates.of(candidates), true);
@@ -162,6 +216,31 @@ public final class CandidateJudge {
         return new ModelStarts(models, warmStarts);
     }
 
+    /**
+     * What the cheap bounds settled so far (docs/search.md#bounds-in-the-judge).
+     *
+     * @param judgements         judgements made
+     * @param passedByModelSum   banks settled as passing by the bound from the poles and residues alone
+     *                           (no exact worst case computed)
+     * @param passedByIdealEdges banks with an edge time settled as passing by their ideal-edge worst case
+     *                           (the slew-limited dynamic program skipped)
+     * @param failedByImpedance  banks whose |Z| lower bound already lies beyond a limit: their verdict is
+     *                           settled (fail), but their exact excess is still computed for the score
+     */
+    public record BoundsSettled(long judgements, long passedByModelSum, long passedByIdealEdges,
+                                long failedByImpedance) {
+
+        /** Judgements whose worst-case figures are upper bounds rather than the exact values. */
+        public long bounded() {
+            return passedByModelSum + passedByIdealEdges;
+        }
+    }
+
+    /** How many judgements each bound settled so far. */
+    public BoundsSettled boundsSettled() {
+        return new BoundsSettled(judgements, passedByModelSum, passedByIdealEdges, failedByImpedance);
+    }
+
     /** Judges the bank with {@code counts[i]} parts of candidate i. */
     public Judgement judge(int[] counts) {
         Scenario s = evaluator.scenario();
@@ -180,6 +259,7 @@ public final class CandidateJudge {
             min = Math.min(min, m);
         }
         double target = rail.targetImpedanceOhms();
+        double[] fHz = engine.grid().frequenciesHz();
         double flatness = 20 * Math.log10(peak / min);
 
         // the bank's network and board figures straight from the counts (same rules as NetworkBuilder and
@@ -263,23 +343,44 @@ public final class CandidateJudge {
                 second = k;
             }
         }
-        double[] fHz = engine.grid().frequenciesHz();
         for (int k : new int[] {at, second}) {
             if (refine && k > 0 && k < mag.length - 1) {
                 peak = Math.max(peak, ImpedanceAnalysis.refineExtremum(network::magnitude, fHz[k - 1], fHz[k + 1], true).magnitudeOhms());
             }
         }
         double targetExcess = s.requireTarget() ? Math.max(0, peak * (1 + TARGET_GUARD) / target - 1) : 0;
+        judgements++;
+        double edgeTimeS = rail.edgeTimeS();
+        double dcOhms = network.dcResistanceOhms();
+        // a lower bound from |Z| on the sweep at hand: when it already lies beyond a limit the bank fails;
+        // the exact excess is still computed, since the hard level ranks failing banks by it
+        WorstCaseBounds.Bounds low = WorstCaseBounds.lower(fHz, mag, mag.length, dcOhms, edgeTimeS);
+        boolean failsByBound = !volts(dcOhms, low).passes();
+        if (failsByBound) {
+            failedByImpedance++;
+        }
         WorstCaseVolts wc;
+        boolean exact = true;
         try {
-            PoleResidueModel near = warmStart ? recentModels.get(used) : null;
+            RecentModels recent = recentModels.get(used);
+            PoleResidueModel near = warmStart && recent != null ? recent.nearest(counts) : null;
             PoleResidueModel model = near != null ? near.near(network) : PoleResidueModel.of(network);
-            recentModels.put(used, model);
+            if (recent == null) {
+                recent = new RecentModels();
+                recentModels.put(used, recent);
+            }
+            recent.add(counts, model);
             models++;
             if (model.warmStarted()) {
                 warmStarts++;
             }
-            wc = evaluator.worstCaseVolts(network, model);
+            wc = failsByBound ? null : passingBound(model, dcOhms, edgeTimeS);
+            if (wc != null) {
+                exact = false;
+            } else {
+                wc = evaluator.worstCaseVolts(network, model);
+                assert !(failsByBound && wc.passes()) : "the impedance lower bound contradicts the exact worst case";
+            }
         } catch (breakwater.timedomain.ModelException unsolvable) {
             // The model of this one candidate failed its self-checks: it cannot be judged, so the search
             // must not pick it. It scores as a volt beyond both limits; the final verdict always comes
@@ -291,6 +392,53 @@ public final class CandidateJudge {
                     Double.POSITIVE_INFINITY);
         }
         return new Judgement(wc.droopV(), wc.overshootV(), wc.droopExcessV(), wc.overshootExcessV(), boardExcess,
-                targetExcess, cost, flatness, peak / target, total);
+                targetExcess, cost, flatness, peak / target, total, exact);
+    }
+
+    /**
+     * The bank's worst case as upper bounds when they already keep it inside the limits, else null: first
+     * the bound from the poles and residues alone, then, with an edge time, the ideal-edge worst case
+     * (docs/worst-case.md#cheap-bounds). The ideal-edge march costs a fraction of the slew-limited dynamic
+     * program; after it fails to settle a bank it is skipped for the next 1, 3, 7, 15 judgements (doubling
+     * while it keeps failing, back to every bank once it settles one), so a stretch of banks near their
+     * limit pays at most a sixteenth of it. Which banks are settled this way changes no score: a passing
+     * bank's hard level is 0 either way and no soft level reads the droop or overshoot.
+     */
+    private WorstCaseVolts passingBound(PoleResidueModel model, double dcOhms, double edgeTimeS) {
+        WorstCaseVolts byModel = volts(dcOhms, WorstCaseBounds.upper(model, edgeTimeS));
+        if (byModel.passes()) {
+            passedByModelSum++;
+            return byModel;
+        }
+        if (edgeTimeS == 0 || !model.hasFiniteDirectTerm()) {
+            return null;
+        }
+        if (idealWait > 0) {
+            idealWait--;
+            return null;
+        }
+        WorstCaseVolts byIdeal;
+        try {
+            byIdeal = volts(dcOhms, WorstCaseBounds.idealEdges(model));
+        } catch (breakwater.timedomain.UnboundedWorstCaseException e) {
+            throw new IllegalStateException("finite direct term checked above", e);
+        } catch (breakwater.timedomain.ModelException e) {
+            // the march's own identity check failed: no bound, and the exact slew-limited computation,
+            // which does not use the march, decides as it would without bounds
+            byIdeal = null;
+        }
+        if (byIdeal != null && byIdeal.passes()) {
+            passedByIdealEdges++;
+            idealSkip = 0;
+            return byIdeal;
+        }
+        idealSkip = Math.min(2 * idealSkip + 1, IDEAL_SKIP_MAX);
+        idealWait = idealSkip;
+        return null;
+    }
+
+    private WorstCaseVolts volts(double dcOhms, WorstCaseBounds.Bounds perAmpere) {
+        return WorstCaseVolts.of(evaluator.scenario().rail(), dcOhms, perAmpere.droopOhms(), perAmpere.overshootOhms(),
+                evaluator.limits().lowerV(), evaluator.limits().upperV());
     }
 }

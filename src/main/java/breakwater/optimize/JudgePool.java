@@ -32,6 +32,9 @@ public final class JudgePool {
     private final ConcurrentHashMap<Key, Judgement> memo = new ConcurrentHashMap<>();
     private final AtomicLong computed = new AtomicLong();
     private final AtomicLong requests = new AtomicLong();
+    /** Every thread's judge, for {@link #boundsSettled()}. */
+    private final java.util.concurrent.ConcurrentLinkedQueue<CandidateJudge> allJudges =
+            new java.util.concurrent.ConcurrentLinkedQueue<>();
 
     /** A pool over the parts themselves, on the board node (a scenario without placement regions). */
     public JudgePool(BankEvaluator evaluator, List<Part> parts) {
@@ -41,7 +44,11 @@ public final class JudgePool {
     public JudgePool(BankEvaluator evaluator, Candidates candidates) {
         this.evaluator = evaluator;
         this.candidates = candidates;
-        this.judges = ThreadLocal.withInitial(() -> new CandidateJudge(evaluator, this.candidates));
+        this.judges = ThreadLocal.withInitial(() -> {
+            CandidateJudge judge = new CandidateJudge(evaluator, this.candidates);
+            allJudges.add(judge);
+            return judge;
+        });
     }
 
     public Candidates candidates() {
@@ -200,6 +207,26 @@ public final class JudgePool {
     /** Judgements computed afresh (memo misses, {@link #peek} included); depends on thread timing. */
     public long computed() {
         return computed.get();
+    }
+
+    /**
+     * What the cheap bounds settled over every thread's judge (docs/search.md#bounds-in-the-judge): the
+     * share of a whole search's judgements (memo misses) that a bound decided. Read it once the search's
+     * threads have finished; while they run, the counts may lag.
+     */
+    public CandidateJudge.BoundsSettled boundsSettled() {
+        long judgements = 0;
+        long byModel = 0;
+        long byIdeal = 0;
+        long byImpedance = 0;
+        for (CandidateJudge judge : allJudges) {
+            CandidateJudge.BoundsSettled b = judge.boundsSettled();
+            judgements += b.judgements();
+            byModel += b.passedByModelSum();
+            byIdeal += b.passedByIdealEdges();
+            byImpedance += b.failedByImpedance();
+        }
+        return new CandidateJudge.BoundsSettled(judgements, byModel, byIdeal, byImpedance);
     }
 
     private record Key(int[] counts) {

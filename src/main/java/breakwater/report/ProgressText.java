@@ -66,9 +66,9 @@ public final class ProgressText {
     public static String line(SearchProgress p, BankEvaluator judge) {
         Scenario scenario = judge.scenario();
         Judgement j = p.best();
-        return String.format(Locale.ROOT, "  %6.1f s  %s; cost %.4f%s; worst droop %s of %s allowed; %d parts; %s",
+        return String.format(Locale.ROOT, "  %6.1f s  %s; cost %.4f%s; worst droop %s%s of %s allowed; %d parts; %s",
                 p.elapsedS(), inWords(j), j.costTotal(), Texts.currency(scenario.cost().currency()),
-                format(j.droopV(), VOLTAGE), format(judge.operatingPointV() - judge.limits().lowerV(), VOLTAGE),
+                atMost(j), format(j.droopV(), VOLTAGE), format(judge.operatingPointV() - judge.limits().lowerV(), VOLTAGE),
                 j.totalParts(), speed(p));
     }
 
@@ -94,10 +94,18 @@ public final class ProgressText {
         String what = smallestExcursion
                 ? "smallest worst excursion so far " + format(excursion, VOLTAGE)
                 : (j.feasible() ? "within the limit" : "not yet within the limit") + "; worst excursion "
-                + format(excursion, VOLTAGE) + " (limit " + format(judge.operatingPointV() - judge.limits().lowerV(),
+                + atMost(j) + format(excursion, VOLTAGE) + " (limit " + format(judge.operatingPointV() - judge.limits().lowerV(),
                 VOLTAGE) + ")";
         return String.format(Locale.ROOT, "  %6.1f s  %s; cost %.4f%s; %d parts; %.0f banks/s", p.elapsedS(), what,
                 j.costTotal(), currency, j.totalParts(), p.evaluationsPerSecond());
+    }
+
+    /**
+     * "at most " when the judge settled the bank by a bound (the bank passes, and the figure shown is an
+     * upper bound of its worst case, not the worst case itself); "" for exact figures.
+     */
+    static String atMost(Judgement j) {
+        return j.figuresExact() ? "" : "at most ";
     }
 
     /** "meets spec" or what is still missing, e.g. "misses by 3.2 mV (droop)". */

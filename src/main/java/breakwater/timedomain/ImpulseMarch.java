@@ -7,8 +7,9 @@ package breakwater.timedomain;
  *
  * <p>Crossings are found by sampling h and h' on a grid whose step is 1/8 of the period 2π/|p| of the
  * fastest mode still alive (values advanced by the recurrence e^{p(t+Δ)} = e^{pt}·e^{pΔ}, no exp call
- * per sample); where |h| exceeds a bound on |h'| times 2^l steps, h provably keeps its sign and those
- * steps are taken at once (l ≤ 4). A sign change brackets one crossing; a pair of crossings inside one step (a shallow dip
+ * per sample); where h provably keeps its sign over 2^l steps (l ≤ 7: |h| above a bound on |h'| times
+ * the span, or above twice the amplitudes of the fastest j ≤ 3 modes plus the span times a bound on the
+ * slope of the others), those steps are taken at once. A sign change brackets one crossing; a pair of crossings inside one step (a shallow dip
  * through zero) is caught from the slopes at both ends: the cubic Hermite interpolant locates the
  * extremum, which is evaluated exactly. Each crossing is refined from the cubic Hermite guess with one or
  * two exact evaluations of h, h', h'' and H and a second-order Taylor step, taken once the correction ε is
@@ -39,8 +40,14 @@ final class ImpulseMarch {
      * as a step does, and the march stops at most this many steps later than it could.
      */
     private static final int CHECK_EVERY = 16;
-    /** Long steps of 2, 4, 8, 16 base steps where h provably keeps its sign. */
-    private static final int LEVELS = 5;
+    /** Long steps of 2, 4, …, 128 base steps where h provably keeps its sign. */
+    private static final int LEVELS = 8;
+    /**
+     * Splits tried in the long-step sign test: the fastest 0, 1, 2 or 3 modes bounded by their amplitude,
+     * the rest by their slope. A fast mode ringing down slowly otherwise holds the march to its own step
+     * long after it has become too small to change the sign of h.
+     */
+    private static final int SPLITS = 4;
 
     /**
      * The base step is π/(4|p|) of the fastest live mode, 1/8 of its period: the step that the crossing
@@ -84,6 +91,16 @@ final class ImpulseMarch {
      */
     private static final double HERMITE_ROOT_TOLERANCE = 1e-9;
 
+    /**
+     * Below this |p·δ| the exact evaluation takes e^{pδ} from its Taylor polynomial of degree
+     * {@value #SERIES_DEGREE} instead of exp, cos and sin: the remainder is below |z|⁹/9! &lt; 1.5e-21, far
+     * under the rounding of the sum (about 1e-16), and the polynomial costs a fraction of the three calls.
+     * Only the fastest live modes (|p| above a fortieth of the fastest) need the calls.
+     */
+    private static final double SERIES_RADIUS = 0.02;
+    private static final int SERIES_DEGREE = 8;
+    private static final double[] INVERSE = {0, 1, 1 / 2.0, 1 / 3.0, 1 / 4.0, 1 / 5.0, 1 / 6.0, 1 / 7.0, 1 / 8.0};
+
     /** Bisections for the cubic's extremum: 2⁻⁶⁰ of a step, beyond double precision. */
     private static final int EXTREMUM_BISECTIONS = 60;
 
@@ -98,6 +115,14 @@ final class ImpulseMarch {
     private final double[] p2i;
     private final double[] c4;
     private final double[] c1;
+    /**
+     * Sign tests for long steps, from the last check: h keeps its sign over a span s when
+     * |h| &gt; splitAmp[j] + splitSlope[j]·s for some j (see {@link #run}), splitSlope being the bound on
+     * the slope of all but the j fastest modes.
+     */
+    private final double[] splitAmp = new double[SPLITS];
+    /** 1/(splitSlope[j]·dt): the span in steps over which the slope of the rest can move h by 1. */
+    private final double[] splitStepsPerSlope = new double[SPLITS];
     private final double[] b0;
     private final double[] zr;
     private final double[] zi;
@@ -155,7 +180,7 @@ final class ImpulseMarch {
             zr[k] = m.weight[k] * m.rr[k];
             zi[k] = m.weight[k] * m.ri[k];
             decay[k] = 1 / -a;
-            b0[k] = Math.hypot(zr[k], zi[k]) * decay[k];
+            b0[k] = Math.sqrt(zr[k] * zr[k] + zi[k] * zi[k]) * decay[k];
             bound[k] = b0[k];
         }
     }
@@ -204,14 +229,12 @@ final class ImpulseMarch {
         double fastest = -1;
         double dt = 0;
         int sinceCheck = CHECK_EVERY;
-        double slopeBound = 0;
         while (true) {
             if (sinceCheck >= CHECK_EVERY) {
                 sinceCheck = 0;
                 // tail bounds |w r| e^{Re(p) t}/|Re p|; drop dead modes; stop when the tail is negligible
                 double tail = 0;
                 bigH = 0;
-                slopeBound = 0;
                 for (int k = na - 1; k >= 0; k--) {
                     // |w r e^{pt}|/|Re p| from the mode's current value (equals b0·e^{Re p·t})
                     double bk = Math.sqrt(zr[k] * zr[k] + zi[k] * zi[k]) * decay[k];
@@ -221,13 +244,25 @@ final class ImpulseMarch {
                     }
                     bound[k] = bk;
                     tail += bk;
-                    slopeBound += bk * c1[k];
                     bigH += zr[k] * ipr[k] - zi[k] * ipi[k];
+                }
+                // the split sign tests: twice the amplitudes of the j fastest modes, the slopes of the rest
+                double amp = 0;
+                for (int j = 0; j < SPLITS; j++) {
+                    double slope = 0;
+                    for (int k = j; k < na; k++) {
+                        slope += bound[k] * c1[k];
+                    }
+                    splitAmp[j] = 2 * amp;
+                    splitStepsPerSlope[j] = slope; // divided into 1/(slope·dt) once dt is known, below
+                    if (j < na) {
+                        amp += bound[j] * -pr[j];
+                    }
                 }
                 if (na == 0 || tail <= relTol * (accumulated + Math.abs(bigH - segH))) {
                     break;
                 }
-                double speed = Math.hypot(pr[0], pi[0]);
+                double speed = Math.sqrt(pr[0] * pr[0] + pi[0] * pi[0]);
                 if (speed != fastest) {
                     fastest = speed;
                     dt = Math.PI / (STEPS_PER_HALF_PERIOD * speed);
@@ -244,13 +279,25 @@ final class ImpulseMarch {
                         }
                     }
                 }
+                for (int j = 0; j < SPLITS; j++) {
+                    splitStepsPerSlope[j] = 1 / (splitStepsPerSlope[j] * dt);
+                }
             }
             sinceCheck++;
-            // |h'| ≤ slopeBound from now on (each |w r e^{pt}||p| only decays): if |h| exceeds
-            // slopeBound·2^l·dt, h keeps its sign over 2^l steps and they are taken at once
+            // h keeps its sign over the next 2^l steps if, for a split j of the modes into the j fastest
+            // (F) and the rest (R), |h| > 2·Σ_F |w r e^{pt}| + span·Σ_R |w r e^{pt}||p|: |F| stays below its
+            // sum and R moves by at most span·max|R'| (each |w r e^{pt}| only decays), so
+            // |h(t + u)| ≥ |h(t)| − 2|F|max − u·max|R'| > 0; j = 0 is the plain slope bound. Those steps are
+            // taken at once; the longest such span, in steps, is max_j (|h| − amp_j)/(slope_j·dt)
             int level = 0;
             double absH = Math.abs(h);
-            while (level < LEVELS - 1 && absH > slopeBound * dt * (2 << level)) {
+            double steps = 0;
+            for (int j = 0; j < SPLITS; j++) {
+                if (absH > splitAmp[j]) {
+                    steps = Math.max(steps, (absH - splitAmp[j]) * splitStepsPerSlope[j]);
+                }
+            }
+            while (level < LEVELS - 1 && (2 << level) < steps) {
                 level++;
             }
             double[] erl = er[level];
@@ -331,15 +378,27 @@ final class ImpulseMarch {
         double hpp = 0;
         double bigH = 0;
         for (int k = 0; k < na; k++) {
-            double e = Math.exp(pr[k] * delta);
+            double x = pr[k] * delta;
+            double y = pi[k] * delta;
             double cr;
             double ci;
-            if (pi[k] == 0.0) {
-                cr = e;
+            if (x * x + y * y <= SERIES_RADIUS * SERIES_RADIUS) {
+                // e^z = 1 + z(1 + z/2(1 + z/3(… (1 + z/8)))), Horner
+                cr = 1;
+                ci = 0;
+                for (int j = SERIES_DEGREE; j >= 1; j--) {
+                    double inv = INVERSE[j];
+                    double nr = 1 + (cr * x - ci * y) * inv;
+                    ci = (cr * y + ci * x) * inv;
+                    cr = nr;
+                }
+            } else if (y == 0.0) {
+                cr = Math.exp(x);
                 ci = 0;
             } else {
-                cr = e * Math.cos(pi[k] * delta);
-                ci = e * Math.sin(pi[k] * delta);
+                double e = Math.exp(x);
+                cr = e * Math.cos(y);
+                ci = e * Math.sin(y);
             }
             double a = zr[k] * cr - zi[k] * ci;
             double b = zr[k] * ci + zi[k] * cr;

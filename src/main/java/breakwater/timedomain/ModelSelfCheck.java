@@ -67,7 +67,7 @@ final class ModelSelfCheck {
     /** Throws unless every one of the {@code m} poles decays by at least {@link #MIN_DAMPING}. */
     static void requireDecaying(double[] pr, double[] pi, int m) {
         for (int k = 0; k < m; k++) {
-            if (!(-pr[k] >= MIN_DAMPING * Math.hypot(pr[k], pi[k]))) {
+            if (!(-pr[k] >= MIN_DAMPING * Math.sqrt(pr[k] * pr[k] + pi[k] * pi[k]))) {
                 throw new ModelException(String.format(Locale.ROOT,
                         "network has an undamped or growing mode at %.6g%+.6gj rad/s; every mode of a "
                                 + "passive network with losses decays. Maybe a branch has zero resistance "
@@ -105,7 +105,7 @@ final class ModelSelfCheck {
         double fLo = Double.POSITIVE_INFINITY;
         double fHi = 0;
         for (int k = 0; k < modes; k++) {
-            double f = Math.hypot(pr[k], pi[k]) / (2 * Math.PI);
+            double f = Math.sqrt(pr[k] * pr[k] + pi[k] * pi[k]) / (2 * Math.PI);
             fLo = Math.min(fLo, f);
             fHi = Math.max(fHi, f);
         }
@@ -129,8 +129,10 @@ final class ModelSelfCheck {
             }
             model.impedance(f, zm);
             net.impedance(f, zn);
-            double err = Math.hypot(zm[0] - zn[0], zm[1] - zn[1]);
-            double mag = Math.hypot(zn[0], zn[1]);
+            double er = zm[0] - zn[0];
+            double ei = zm[1] - zn[1];
+            double err = Math.sqrt(er * er + ei * ei);
+            double mag = Math.sqrt(zn[0] * zn[0] + zn[1] * zn[1]);
             if (!(err <= CHECK_TOLERANCE * mag)) {
                 throw new ModelException(String.format(Locale.ROOT,
                         "pole-residue model disagrees with the network impedance at %.6g Hz: "

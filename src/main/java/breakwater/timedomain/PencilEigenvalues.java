@@ -158,7 +158,7 @@ final class PencilEigenvalues {
             // λ = σ + 1/μ
             double lr = sigma + wr[k] / mu2;
             double li = -wi[k] / mu2;
-            if (Math.hypot(lr, li) > maxRate) {
+            if (lr * lr + li * li > maxRate * maxRate) {
                 continue; // an infinite eigenvalue of the pencil
             }
             out[2 * c] = lr;

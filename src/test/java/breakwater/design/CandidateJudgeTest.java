@@ -48,13 +48,57 @@ class CandidateJudgeTest {
             counts[i] = Math.max(0, counts[i] + rnd.nextInt(5) - 2);
             Judgement a = warm.judge(counts);
             Judgement b = cold.judge(counts);
-            assertThat(a.droopV()).isCloseTo(b.droopV(), within(1e-12));
-            assertThat(a.overshootV()).isCloseTo(b.overshootV(), within(1e-12));
+            if (a.figuresExact() && b.figuresExact()) {
+                assertThat(a.droopV()).isCloseTo(b.droopV(), within(1e-12));
+                assertThat(a.overshootV()).isCloseTo(b.overshootV(), within(1e-12));
+            }
+            assertThat(a.droopExcessV()).isCloseTo(b.droopExcessV(), within(1e-12));
+            assertThat(a.overshootExcessV()).isCloseTo(b.overshootExcessV(), within(1e-12));
         }
         assertThat(cold.modelStarts().warmStarts()).isZero();
         assertThat(warm.modelStarts().models()).isEqualTo(200);
         // most steps keep the same part types, and those start warm
         assertThat(warm.modelStarts().warmStarts()).isGreaterThan(100);
+    }
+
+    /**
+     * A walk that jumps back (30 … 37 parts of the smallest type, then 30 again) starts every model after the
+     * first warm: the jump back starts from the nearest model kept for those parts (34), from which Newton's
+     * method finds every pole, where the last one (37) is too far for it on this rail.
+     */
+    @Test
+    void aJumpBackStartsFromTheNearestRecentModel() throws Exception {
+        var scenario = Fixtures.scenario()
+                .rail(new Rail("r", 0.9, 0.03, 5, 2.5, 0))
+                .band(new breakwater.scenario.Band(1e4, 1.5e8))
+                .regulator(new breakwater.scenario.Regulator(0.3e-3, 18e-9))
+                .plane(new Plane(5e-9, 0.4e-3))
+                .packagePath(PackagePath.of(0.3e-3, 10e-12))
+                .die(new Die(600e-9, 4e-3))
+                .build();
+        List<Part> parts = List.of(
+                Part.of("bulk-220u", 220e-6, 12e-3, 2.0e-9, 0.8e-9, 0.22),
+                Part.of("bulk-100u", 100e-6, 25e-3, 1.5e-9, 0.7e-9, 0.16),
+                Part.of("x5r-22u", 22e-6, 4e-3, 0.68e-9, 0.7e-9, 0.04),
+                Part.of("x5r-10u", 10e-6, 6e-3, 0.5e-9, 0.6e-9, 0.02),
+                Part.of("x5r-2u2", 2.2e-6, 12e-3, 0.36e-9, 0.45e-9, 0.008),
+                Part.of("x5r-1u", 1e-6, 30e-3, 0.2e-9, 0.35e-9, 0.008),
+                Part.of("x5r-100n", 100e-9, 55e-3, 0.18e-9, 0.35e-9, 0.003),
+                Part.of("x7r-10n", 10e-9, 80e-3, 0.33e-9, 0.45e-9, 0.0015));
+        BankEvaluator ev = new BankEvaluator(scenario, Optional.empty());
+        CandidateJudge warm = new CandidateJudge(ev, parts);
+        CandidateJudge cold = new CandidateJudge(ev, parts, false);
+        int[] counts = {3, 2, 1, 8, 1, 12, 25, 30};
+        for (int n : new int[] {30, 31, 32, 33, 34, 35, 36, 37, 30}) {
+            counts[7] = n;
+            Judgement a = warm.judge(counts);
+            Judgement b = cold.judge(counts);
+            assertThat(a.droopExcessV()).isEqualTo(b.droopExcessV());
+            if (a.figuresExact() && b.figuresExact()) {
+                assertThat(a.droopV()).isCloseTo(b.droopV(), within(1e-12));
+            }
+        }
+        assertThat(warm.modelStarts()).isEqualTo(new CandidateJudge.ModelStarts(9, 8));
     }
 
     @Test
@@ -77,10 +121,18 @@ class CandidateJudgeTest {
             }
             Judgement j = judge.judge(counts);
             Evaluation e = ev.evaluate(CapacitorBank.of(PARTS, counts));
-            // the worst case is the same exact computation: equal to rounding
-            assertThat(j.droopV()).isCloseTo(e.figures().droopV(), within(1e-12));
-            assertThat(j.overshootV()).isCloseTo(e.figures().overshootV(), within(1e-12));
+            if (j.figuresExact()) {
+                // the worst case is the same exact computation: equal to rounding
+                assertThat(j.droopV()).isCloseTo(e.figures().droopV(), within(1e-12));
+                assertThat(j.overshootV()).isCloseTo(e.figures().overshootV(), within(1e-12));
+            } else {
+                // settled by a bound: the bank passes, and the figures are upper bounds of the exact ones
+                assertThat(e.figures().passes()).isTrue();
+                assertThat(j.droopV()).isGreaterThanOrEqualTo(e.figures().droopV());
+                assertThat(j.overshootV()).isGreaterThanOrEqualTo(e.figures().overshootV());
+            }
             assertThat(j.droopExcessV()).isCloseTo(e.figures().droopExcessV(), within(1e-12));
+            assertThat(j.overshootExcessV()).isCloseTo(e.figures().overshootExcessV(), within(1e-12));
             assertThat(j.costTotal()).isCloseTo(e.cost().total(), within(1e-12));
             assertThat(j.totalParts()).isEqualTo(e.bank().totalParts());
             int excess = e.board().stream().mapToInt(BoardCheck.Violation::excess).sum();

@@ -35,5 +35,13 @@ class ProgressTextTest {
         Judgement out = new Judgement(0.0250, 0.0230, 0.0006, 0, 0, 0, 1.9, 10, 0.8, 30);
         assertThat(ProgressText.frontierLine(new SearchProgress(1.0, CapacitorBank.EMPTY, out, 1000), limit, false))
                 .contains("not yet within the limit; worst excursion 25 mV (limit 24.4 mV)").doesNotContain("misses");
+        // a bank the judge settled by an upper bound: the figure is shown as the bound it is
+        Judgement bounded = new Judgement(0.0240, 0.0220, 0, 0, 0, 0, 2.1, 10, 0.8, 38, false);
+        assertThat(ProgressText.frontierLine(new SearchProgress(2.0, CapacitorBank.EMPTY, bounded, 2000), limit, false))
+                .contains("within the limit; worst excursion at most 24 mV (limit 24.4 mV)");
+        assertThat(ProgressText.line(new SearchProgress(2.0, CapacitorBank.EMPTY, bounded, 2000), spec))
+                .contains("meets spec").contains("worst droop at most 24 mV of");
+        assertThat(ProgressText.line(new SearchProgress(2.0, CapacitorBank.EMPTY, within, 2000), spec))
+                .contains("worst droop 23.7 mV of");
     }
 }
