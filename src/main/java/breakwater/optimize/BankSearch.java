@@ -100,6 +100,11 @@ public final class BankSearch {
         return search;
     }
 
+    /** What the judges' cheap bounds settled so far, over every solver thread (docs/search.md#bounds-in-the-judge). */
+    public breakwater.design.CandidateJudge.BoundsSettled boundsSettled() {
+        return pool.boundsSettled();
+    }
+
     /** What screening left out before this search ({@link #forScenario}); nothing for a search built directly. */
     public Screening screening() {
         return screening != null ? screening : Screening.none(candidates, maxCounts);

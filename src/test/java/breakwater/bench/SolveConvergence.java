@@ -54,6 +54,7 @@ public final class SolveConvergence {
             Catalog c = CatalogReader.read(s.catalogFile(), s.catalogFile().toString());
             BankEvaluator ev = new BankEvaluator(s, Optional.empty());
             List<SearchResult> results = new ArrayList<>();
+            List<String> settled = new ArrayList<>();
             String screening = "";
             for (int r = 0; r < runs; r++) {
                 BankSearch search = BankSearch.forScenario(ev, c.parts());
@@ -61,17 +62,23 @@ public final class SolveConvergence {
                 // the settings a user gets from `solve --time-limit <seconds>s --seed <1 + 10 r>`
                 SearchSettings settings = SearchSettings.defaults(Duration.ofSeconds(seconds), 1 + 10L * r);
                 results.add(search.run(settings, CapacitorBank.EMPTY));
+                var b = search.boundsSettled();
+                settled.add(String.format(Locale.ROOT, "%d judged afresh, %.0f %% settled by a bound (%d passing by "
+                                + "the model's sum, %d by the ideal-edge case, %d failing by |Z|)", b.judgements(),
+                        100.0 * (b.bounded() + b.failedByImpedance()) / Math.max(1, b.judgements()),
+                        b.passedByModelSum(), b.passedByIdealEdges(), b.failedByImpedance()));
             }
             double best = results.stream().filter(x -> x.judgement().feasible())
                     .mapToDouble(x -> x.judgement().costTotal()).min().orElse(Double.NaN);
             System.out.printf(Locale.ROOT, "%s (%d parts; %s): best-known cost %.4f%n", name, c.parts().size(),
                     screening, best);
-            for (SearchResult r : results) {
+            for (int k = 0; k < results.size(); k++) {
+                SearchResult r = results.get(k);
                 System.out.printf(Locale.ROOT, "  seed %d: first pass at %s, at 10 s %s, at 30 s %s, final %s; "
-                                + "within 1 %% at %s, 2 %% at %s; %d banks evaluated%n", r.seed(),
+                                + "within 1 %% at %s, 2 %% at %s; %d banks evaluated; %s%n", r.seed(),
                         secs(r.secondsToReach(Double.POSITIVE_INFINITY)), costAt(r, 10, best), costAt(r, 30, best),
                         costAt(r, Double.POSITIVE_INFINITY, best), secs(r.secondsToReach(best * 1.01)),
-                        secs(r.secondsToReach(best * 1.02)), r.evaluations());
+                        secs(r.secondsToReach(best * 1.02)), r.evaluations(), settled.get(k));
             }
         }
     }
