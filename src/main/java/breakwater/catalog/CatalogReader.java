@@ -2,6 +2,7 @@ package breakwater.catalog;
 
 import breakwater.diagnostic.Diagnostic;
 import breakwater.diagnostic.Diagnostics;
+import breakwater.diagnostic.HiddenCharacters;
 import breakwater.diagnostic.InputException;
 import breakwater.diagnostic.Suggestions;
 import breakwater.diagnostic.TextFiles;
@@ -62,7 +63,7 @@ public final class CatalogReader {
      * @throws IOException    if the file cannot be read
      */
     public static Catalog read(Path file, String displayName) throws InputException, IOException {
-        return parseText(TextFiles.readUtf8(file, displayName), displayName);
+        return parseText(TextFiles.readUtf8(file, displayName, "a catalog file (CSV)"), displayName);
     }
 
     /** Reads a catalog from {@code in}; see {@link #read(Path, String)}. */
@@ -70,7 +71,9 @@ public final class CatalogReader {
         return parseText(TextFiles.readAll(in), displayName);
     }
 
-    private static Catalog parseText(String text, String source) throws InputException, IOException {
+    private static Catalog parseText(String raw, String source) throws InputException, IOException {
+        TextFiles.checkLines(raw, source);
+        String text = HiddenCharacters.scan(raw, source, HiddenCharacters.Syntax.CSV).textOrThrow();
         Diagnostics problems = new Diagnostics();
         Optional<CsvTable> read = CsvTable.read(text, source, problems);
         if (read.isEmpty()) {

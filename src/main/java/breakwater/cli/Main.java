@@ -184,7 +184,8 @@ public final class Main implements Runnable {
         cl.setExecutionExceptionHandler((ex, c, parseResult) -> {
             PrintWriter e = c.getErr();
             int code = exitCodeFor(ex);
-            if (code == ExitCodes.INVALID_INPUT && ex instanceof InputException ie) {
+            if (code == ExitCodes.INVALID_INPUT && ex instanceof InputException found) {
+                InputException ie = Inputs.placed(found);
                 for (Diagnostic d : ie.diagnostics()) {
                     e.println(d.render());
                 }
