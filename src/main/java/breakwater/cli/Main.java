@@ -54,7 +54,7 @@ public final class Main implements Runnable {
      * Heap kept back for the last words: released before an internal error is reported, so that the
      * report of an out-of-memory error has room to be written (common practice for a program's last line).
      */
-    private static volatile byte[] reserve = new byte[256 * 1024];
+    private static volatile byte[] reserve = new byte[512 * 1024];
 
     /**
      * When this program started (the Java virtual machine's start), for a time limit that counts from
@@ -75,12 +75,42 @@ public final class Main implements Runnable {
         // a throwable on a thread of our own (progress, a solver) ends the run like one on the main thread;
         // the writer is made now, while there is memory for it
         PrintWriter lastWords = new PrintWriter(System.err, true, StandardCharsets.UTF_8);
+        // a worker of a parallel stream or of the solvers that dies (out of memory, say) ends the process:
+        // whatever the handler itself meets, the halt follows, so nothing waits for the dead worker's part.
+        // Halting loads the JVM's shutdown class on first use, which needs heap: load it now (a hook added
+        // and removed), or a halt out of memory fails inside the handler and the process lives on
+        Thread warm = new Thread(() -> { });
+        Runtime.getRuntime().addShutdownHook(warm);
+        Runtime.getRuntime().removeShutdownHook(warm);
         Thread.setDefaultUncaughtExceptionHandler((thread, ex) -> {
-            internalError(ex, lastWords, debug);
-            Runtime.getRuntime().halt(ExitCodes.INTERNAL);
+            try {
+                internalError(ex, lastWords, debug);
+            } finally {
+                Runtime.getRuntime().halt(ExitCodes.INTERNAL);
+            }
         });
-        System.exit(run(args, System.out, System.err));
+        oneProcess = true;
+        int code = run(args, System.out, System.err);
+        if (code == ExitCodes.INTERNAL) {
+            // no shutdown hook or lingering worker may hold the end back
+            System.out.flush();
+            System.err.flush();
+            Runtime.getRuntime().halt(code);
+        }
+        System.exit(code);
     }
+
+    /**
+     * Set in {@link #main}: then the last words of an internal error are said once per process, however
+     * many threads meet an error at once (workers of a parallel stream running out of memory together).
+     */
+    private static volatile boolean oneProcess;
+    private static final Object LAST_WORDS = new Object();
+    private static boolean lastWordsSaid;
+
+    /** The out-of-memory line when even its own words find no room (no concatenation at that moment). */
+    private static final String OUT_OF_MEMORY_LINE = "breakwater: internal error: the Java heap ran out of memory; "
+            + "please report it with the command you ran; more heap may get round it (BREAKWATER_JAVA_OPTS=-Xmx4g).";
 
     /** Runs the command line in-process; returns the exit code. Used by tests too. */
     public static int run(String[] args, PrintStream out, PrintStream err) {
@@ -124,12 +154,41 @@ public final class Main implements Runnable {
      */
     static int internalError(Throwable ex, PrintWriter e, boolean debug) {
         reserve = null;
+        synchronized (LAST_WORDS) {
+            if (oneProcess && lastWordsSaid) {
+                return ExitCodes.INTERNAL;
+            }
+            // out of memory, the line itself may find no room at first: other threads that meet the error
+            // wait at the lock above, so memory comes free; a few tries, then the exit code alone tells
+            // (the wait spins: sleeping may itself need heap)
+            for (int attempt = 0; attempt < 50 && !say(ex, e, debug); attempt++) {
+                long until = System.nanoTime() + 20_000_000L;
+                while (System.nanoTime() < until) {
+                    Thread.onSpinWait();
+                }
+            }
+            lastWordsSaid = true;
+        }
+        return ExitCodes.INTERNAL;
+    }
+
+    /** Prints the line (and the trace when asked); false when it could not be printed. */
+    private static boolean say(Throwable ex, PrintWriter e, boolean debug) {
         try {
             if (ex instanceof OutOfMemoryError) {
-                e.println("breakwater: internal error: the Java heap ran out of memory (" + ex.getMessage()
-                        + "); please report it with the command you ran; more heap may get round it "
-                        + "(BREAKWATER_JAVA_OPTS=-Xmx4g)" + (debug ? "" : "; --debug or " + DEBUG_ENV
-                        + "=1 shows the trace") + ".");
+                // built with a StringBuilder: a first string concatenation would link its call site, and
+                // that needs heap too
+                String line;
+                try {
+                    line = new StringBuilder("breakwater: internal error: the Java heap ran out of memory (")
+                            .append(ex.getMessage()).append("); please report it with the command you ran; more heap ")
+                            .append("may get round it (BREAKWATER_JAVA_OPTS=-Xmx4g)")
+                            .append(debug ? "" : "; --debug or BREAKWATER_DEBUG=1 shows the trace").append('.')
+                            .toString();
+                } catch (Throwable noRoom) {
+                    line = OUT_OF_MEMORY_LINE;
+                }
+                e.println(line);
             } else {
                 String what = ex.getClass().getSimpleName() + (ex.getMessage() == null ? "" : ": "
                         + firstLine(ex.getMessage()));
@@ -141,10 +200,19 @@ public final class Main implements Runnable {
                 ex.printStackTrace(e);
             }
             e.flush();
+            return true;
         } catch (Throwable again) {
-            // nothing more can be said; the exit code still tells
+            try {
+                if (ex instanceof OutOfMemoryError) {
+                    e.println(OUT_OF_MEMORY_LINE);
+                    e.flush();
+                    return true;
+                }
+            } catch (Throwable still) {
+                // not now
+            }
+            return false;
         }
-        return ExitCodes.INTERNAL;
     }
 
     private static String firstLine(String s) {
