@@ -33,6 +33,10 @@ record Inputs(Scenario scenario, Catalog catalog, Optional<Footprint> footprint,
         List<String> warnings = new java.util.ArrayList<>();
         warnings.addAll(spaceWarnings(scenarioFile, display(scenarioFile), HiddenCharacters.Syntax.TOML));
         warnings.addAll(spaceWarnings(in.scenario().catalogFile(), in.catalog().source(), HiddenCharacters.Syntax.CSV));
+        breakwater.scenario.ScenarioPlaces places = breakwater.scenario.ScenarioPlaces.of(scenarioFile,
+                display(scenarioFile));
+        breakwater.scenario.ScenarioRanges.warnings(in.scenario(), places).forEach(d -> warnings.add(d.render()));
+        in.catalog().warnings().forEach(d -> warnings.add(d.render()));
         warnings.addAll(caseWarnings(scenarioFile, in));
         return new Inputs(in.scenario(), in.catalog(), in.footprint(), warnings);
     }
