@@ -243,7 +243,7 @@ public final class Main implements Runnable {
             if (unknownCommand(ex, cl)) {
                 return ExitCodes.USAGE;
             }
-            c.getErr().println("breakwater: " + ex.getMessage());
+            c.getErr().println("breakwater: " + plainWords(ex.getMessage()));
             CommandLine.UnmatchedArgumentException.printSuggestions(ex, c.getErr());
             c.getErr().println("Try 'breakwater " + (c == cl ? "" : c.getCommandName() + " ") + "--help'.");
             c.getErr().flush();
@@ -270,6 +270,15 @@ public final class Main implements Runnable {
             return code;
         });
         return cl.execute(args);
+    }
+
+    /**
+     * picocli's message without Java's type names: "'x' is not a long" reads "'x' is not a whole number"
+     * (within the range Java keeps for it), "is not a double" reads "is not a number".
+     */
+    static String plainWords(String message) {
+        return message.replaceAll("' is not an? (int|long|short|byte|Integer|Long)\\b", "' is not a whole number (or too large)")
+                .replaceAll("' is not an? (double|float|Double|Float)\\b", "' is not a number");
     }
 
     /**

@@ -131,7 +131,7 @@ public final class ScenarioReader {
             line = deepestLine(text);
             column = 0;
         }
-        if (lower.contains("duplicate") || lower.contains("redefined")) {
+        if (lower.contains("duplicate") || lower.contains("redefined") || lower.contains("existing non-object")) {
             Optional<TomlLocator.Duplicate> twice = locator.firstDuplicate();
             if (twice.isPresent()) {
                 TomlLocator.Duplicate d = twice.get();
@@ -198,6 +198,10 @@ public final class ScenarioReader {
         if (m.contains("exceeds the maximum") || m.contains("exceeds the maximum allowed")) {
             String what = m.contains("name") ? "a key" : m.contains("number") ? "a number" : "a value";
             return what + " too long to read (a scenario's keys and values are a few words)";
+        }
+        if (m.contains("premature end of file") || m.contains("unexpected end")) {
+            return "the file ends inside a value: a closing quote (three quotes for a multi-line string), bracket or "
+                    + "brace is missing";
         }
         String cut = parserMessage.replaceAll("\\s*\\(from `[^`]*`\\)", "").replaceAll("`[^`]*`", "").strip();
         return cut.isEmpty() ? "syntax error" : Character.toLowerCase(cut.charAt(0)) + cut.substring(1);

@@ -222,4 +222,31 @@ class InputMessagesCliTest {
         assertThat(r.err()).contains("parts.csv:" + line + ":", "tolerance '100 %' is outside 0..100 %");
         speaksPlainly(r);
     }
+
+    @Test
+    void moreMalformedInputsAreSaidInOurWords(@TempDir Path dir) throws IOException {
+        // a key given a value, then used as a table: the parser's own words name its node types
+        Path both = demoCopy(dir, "[board.max_per_case]", "[board.max_per_case]");
+        Files.writeString(both, Files.readString(both).replace("max_distinct = 8", "max_distinct = 8\nmax_per_case = 3"));
+        CliTest.Run b = run("check", both.toString(), "--bank", DEMO_BANK.toString());
+        assertThat(b.code()).as(b.err()).isEqualTo(ExitCodes.INVALID_INPUT);
+        assertThat(b.err()).contains(":" + lineOf(both, "[board.max_per_case]") + ":1: [board.max_per_case] is defined "
+                + "twice; first at line " + lineOf(both, "max_per_case = 3")).doesNotContain("NUMBER", "non-object");
+
+        // a multi-line string never closed
+        Path open = demoCopy(Files.createDirectories(dir.resolve("o")), "[band]", "[band]");
+        Files.writeString(open, Files.readString(open) + "note = \"\"\"never closed\n");
+        CliTest.Run o = run("check", open.toString(), "--bank", DEMO_BANK.toString());
+        assertThat(o.err()).contains("not valid TOML: the file ends inside a value: a closing quote");
+
+        // command-line numbers: no Java type names
+        CliTest.Run seed = run("solve", CliTest.DEMO.toString(), "--seed", "x");
+        assertThat(seed.code()).isEqualTo(ExitCodes.USAGE);
+        assertThat(seed.err()).contains("'x' is not a whole number").doesNotContain("long");
+        CliTest.Run samples = run("check", CliTest.DEMO.toString(), "--bank", DEMO_BANK.toString(), "--monte-carlo", "1e3");
+        assertThat(samples.err()).contains("'1e3' is not a whole number").doesNotContain(" int");
+        for (CliTest.Run r : List.of(b, o, seed, samples)) {
+            speaksPlainly(r);
+        }
+    }
 }
