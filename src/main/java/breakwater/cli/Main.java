@@ -86,12 +86,42 @@ public final class Main implements Runnable {
             try {
                 internalError(ex, lastWords, debug);
             } finally {
+                lastResort(ex);
                 Runtime.getRuntime().halt(ExitCodes.INTERNAL);
             }
         });
+        // the out-of-memory line as bytes, and a stream that writes them with no heap: the last resort
+        try {
+            java.io.FileOutputStream raw = new java.io.FileOutputStream(java.io.FileDescriptor.err);
+            raw.write(new byte[0]); // links the write path now
+            rawErr = raw;
+            String trace = debug ? "" : " --debug or " + DEBUG_ENV + "=1 shows the trace.";
+            outOfMemoryBytes = (OUT_OF_MEMORY_LINE + trace + System.lineSeparator()).getBytes(StandardCharsets.UTF_8);
+            internalErrorBytes = ("breakwater: internal error (a bug in breakwater, not in your input); please report it "
+                    + "with the command you ran." + trace + System.lineSeparator()).getBytes(StandardCharsets.UTF_8);
+        } catch (IOException | RuntimeException unusable) {
+            rawErr = null; // then the writer alone
+        }
+        // every call on the way to the last words is linked now: linking a call for the first time needs
+        // heap, and out of memory it fails (the line was lost so, now and then, before this)
+        try {
+            if (rawErr != null) {
+                rawErr.write(new byte[0]);
+                rawErr.flush();
+            }
+            outOfMemory(WARM_UP);
+            internalError(WARM_UP, lastWords, debug);
+            say(WARM_UP, lastWords, debug);
+            lastResort(WARM_UP);
+            Thread.onSpinWait();
+            System.nanoTime();
+        } catch (IOException | RuntimeException unusable) {
+            // the writer alone, as before
+        }
         oneProcess = true;
         int code = run(args, System.out, System.err);
         if (code == ExitCodes.INTERNAL) {
+            lastResort(lastError);
             // no shutdown hook or lingering worker may hold the end back
             System.out.flush();
             System.err.flush();
@@ -106,6 +136,37 @@ public final class Main implements Runnable {
      */
     private static volatile boolean oneProcess;
     private static final Object LAST_WORDS = new Object();
+    /** Standard error as a plain file stream, and the out-of-memory line as bytes, made in {@link #main}. */
+    private static volatile java.io.OutputStream rawErr;
+    private static volatile byte[] outOfMemoryBytes;
+    private static volatile byte[] internalErrorBytes;
+    /** Passed once at the start to link the calls of the last words; each returns at once for it. */
+    private static final Throwable WARM_UP = new Error("warm-up", null, false, false) { };
+
+    /** The error last met by {@link #internalError}, for the last resort; null before any. */
+    private static volatile Throwable lastError;
+
+    /**
+     * Before the process ends on an internal error: when no line could be said (or the exit code came
+     * without one), the line made at the start, written with no heap; nothing when one was said.
+     */
+    private static void lastResort(Throwable ex) {
+        if (ex == WARM_UP) {
+            return;
+        }
+        try {
+            synchronized (LAST_WORDS) {
+                if (lastWordsSaid || rawErr == null) {
+                    return;
+                }
+                rawErr.write(ex == null || outOfMemory(ex) ? outOfMemoryBytes : internalErrorBytes);
+                rawErr.flush();
+                lastWordsSaid = true;
+            }
+        } catch (Throwable nothing) {
+            // the exit code still tells
+        }
+    }
     private static boolean lastWordsSaid;
 
     /** The out-of-memory line when even its own words find no room (no concatenation at that moment). */
@@ -153,7 +214,11 @@ public final class Main implements Runnable {
      * out of memory gets its own words, since more heap may be the way round it.
      */
     static int internalError(Throwable ex, PrintWriter e, boolean debug) {
+        if (ex == WARM_UP) {
+            return ExitCodes.INTERNAL;
+        }
         reserve = null;
+        lastError = ex;
         synchronized (LAST_WORDS) {
             if (oneProcess && lastWordsSaid) {
                 return ExitCodes.INTERNAL;
@@ -161,21 +226,54 @@ public final class Main implements Runnable {
             // out of memory, the line itself may find no room at first: other threads that meet the error
             // wait at the lock above, so memory comes free; a few tries, then the exit code alone tells
             // (the wait spins: sleeping may itself need heap)
-            for (int attempt = 0; attempt < 50 && !say(ex, e, debug); attempt++) {
+            boolean said = false;
+            for (int attempt = 0; attempt < 50 && !(said = say(ex, e, debug)); attempt++) {
                 long until = System.nanoTime() + 20_000_000L;
                 while (System.nanoTime() < until) {
                     Thread.onSpinWait();
                 }
             }
-            lastWordsSaid = true;
+            lastWordsSaid = said;
         }
         return ExitCodes.INTERNAL;
     }
 
+    /**
+     * Whether {@code ex} is the heap running out, itself or as the cause of another error (a class that
+     * could not be initialised, a call site that could not be linked, out of memory).
+     */
+    private static boolean outOfMemory(Throwable ex) {
+        Throwable t = ex;
+        for (int depth = 0; t != null && depth < 8; depth++, t = t.getCause()) {
+            if (t instanceof OutOfMemoryError) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     /** Prints the line (and the trace when asked); false when it could not be printed. */
     private static boolean say(Throwable ex, PrintWriter e, boolean debug) {
+        if (ex == WARM_UP) {
+            return true;
+        }
         try {
-            if (ex instanceof OutOfMemoryError) {
+            if (outOfMemory(ex) && rawErr != null) {
+                // a process of its own: the bytes made at the start, written with no heap at all
+                e.flush();
+                rawErr.write(outOfMemoryBytes);
+                rawErr.flush();
+                if (debug) {
+                    try {
+                        ex.printStackTrace(e);
+                        e.flush();
+                    } catch (Throwable noRoom) {
+                        // the line is out; the trace needed more heap than there was
+                    }
+                }
+                return true;
+            }
+            if (outOfMemory(ex)) {
                 // built with a StringBuilder: a first string concatenation would link its call site, and
                 // that needs heap too
                 String line;
@@ -200,10 +298,10 @@ public final class Main implements Runnable {
                 ex.printStackTrace(e);
             }
             e.flush();
-            return true;
+            return !e.checkError(); // a writer that failed underneath says so only here
         } catch (Throwable again) {
             try {
-                if (ex instanceof OutOfMemoryError) {
+                if (outOfMemory(ex)) {
                     e.println(OUT_OF_MEMORY_LINE);
                     e.flush();
                     return true;
