@@ -2,6 +2,7 @@ package breakwater.catalog;
 
 import breakwater.diagnostic.Diagnostic;
 import breakwater.diagnostic.Diagnostics;
+import breakwater.diagnostic.HiddenCharacters;
 import breakwater.diagnostic.InputException;
 import breakwater.diagnostic.Suggestions;
 import breakwater.diagnostic.TextFiles;
@@ -58,7 +59,8 @@ public final class BankFileReader {
      */
     public static List<BankEntry> read(Path file, String displayName, Catalog catalog, List<String> regions)
             throws InputException, IOException {
-        return parseText(TextFiles.readUtf8(file, displayName), displayName, catalog, regions);
+        return parseText(TextFiles.readUtf8(file, displayName, "a bank file (CSV: part,count)"), displayName, catalog,
+                regions);
     }
 
     /** Reads a bank from {@code in}; see {@link #read(Path, String, Catalog)}. */
@@ -73,8 +75,11 @@ public final class BankFileReader {
         return parseText(TextFiles.readAll(in), displayName, catalog, regions);
     }
 
-    private static List<BankEntry> parseText(String text, String source, Catalog catalog, List<String> regions)
+    private static List<BankEntry> parseText(String raw, String source, Catalog catalog, List<String> regions)
             throws InputException, IOException {
+        TextFiles.checkLines(raw, source);
+        // a bank holds names and whole counts, no value with a unit: no space stands in for a plain one
+        String text = HiddenCharacters.scan(raw, source, HiddenCharacters.Syntax.CSV, false).textOrThrow();
         Diagnostics problems = new Diagnostics();
         Optional<CsvTable> read = CsvTable.read(text, source, problems);
         if (read.isEmpty()) {

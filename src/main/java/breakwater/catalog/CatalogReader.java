@@ -2,12 +2,14 @@ package breakwater.catalog;
 
 import breakwater.diagnostic.Diagnostic;
 import breakwater.diagnostic.Diagnostics;
+import breakwater.diagnostic.HiddenCharacters;
 import breakwater.diagnostic.InputException;
 import breakwater.diagnostic.Suggestions;
 import breakwater.diagnostic.TextFiles;
 import breakwater.units.CaseCode;
 import breakwater.units.EngineeringNotation;
 import breakwater.units.NotationException;
+import breakwater.units.CaseRange;
 import breakwater.units.Plausible;
 import breakwater.units.Quantity;
 import java.io.IOException;
@@ -62,7 +64,7 @@ public final class CatalogReader {
      * @throws IOException    if the file cannot be read
      */
     public static Catalog read(Path file, String displayName) throws InputException, IOException {
-        return parseText(TextFiles.readUtf8(file, displayName), displayName);
+        return parseText(TextFiles.readUtf8(file, displayName, "a catalog file (CSV)"), displayName);
     }
 
     /** Reads a catalog from {@code in}; see {@link #read(Path, String)}. */
@@ -70,7 +72,9 @@ public final class CatalogReader {
         return parseText(TextFiles.readAll(in), displayName);
     }
 
-    private static Catalog parseText(String text, String source) throws InputException, IOException {
+    private static Catalog parseText(String raw, String source) throws InputException, IOException {
+        TextFiles.checkLines(raw, source);
+        String text = HiddenCharacters.scan(raw, source, HiddenCharacters.Syntax.CSV).textOrThrow();
         Diagnostics problems = new Diagnostics();
         Optional<CsvTable> read = CsvTable.read(text, source, problems);
         if (read.isEmpty()) {
@@ -89,6 +93,7 @@ public final class CatalogReader {
         boolean headerComplete = columns.keySet().containsAll(REQUIRED_COLUMNS);
 
         List<Part> parts = new ArrayList<>();
+        List<Diagnostic> warnings = new ArrayList<>();
         Map<String, Integer> firstLineOfPart = new HashMap<>();
         if (headerComplete) {
             for (CsvTable.Row row : table.rows) {
@@ -98,7 +103,7 @@ public final class CatalogReader {
                             + " this rail can use");
                     break;
                 }
-                readRow(row, table.header.size(), columns, source, problems, firstLineOfPart)
+                readRow(row, table.header.size(), columns, source, problems, firstLineOfPart, warnings)
                         .ifPresent(parts::add);
             }
             if (table.rows.isEmpty()) {
@@ -107,7 +112,7 @@ public final class CatalogReader {
             }
         }
         problems.throwIfAnyInFileOrder();
-        return new Catalog(source, parts);
+        return new Catalog(source, parts, warnings);
     }
 
     /** Column name (lower case) → field index; reports unknown, duplicate and missing columns. */
@@ -142,7 +147,7 @@ public final class CatalogReader {
 
     private static Optional<Part> readRow(CsvTable.Row row, int width, Map<String, Integer> columns,
                                           String source, Diagnostics problems,
-                                          Map<String, Integer> firstLineOfPart) {
+                                          Map<String, Integer> firstLineOfPart, List<Diagnostic> warnings) {
         if (row.size() != width) {
             int column = row.size() > width ? row.cell(width).column() : row.endColumn();
             problems.error(source, row.line(), column, "this row has " + row.size() + " field"
@@ -230,6 +235,15 @@ public final class CatalogReader {
 
         if (r.failed()) {
             return Optional.empty();
+        }
+        // beyond what the case usually holds: warned at the cell, not refused (the case code is only a label)
+        Optional<CaseRange> usual = CaseRange.of(caseCode);
+        if (usual.isPresent()) {
+            usual.get().capacitanceWarning("capacitance", r.text("capacitance"), capacitance)
+                    .ifPresent(w -> warnings.add(Diagnostic.at(source, r.cell("capacitance").line(),
+                            r.cell("capacitance").column(), w)));
+            usual.get().eslWarning("esl", r.text("esl"), esl)
+                    .ifPresent(w -> warnings.add(Diagnostic.at(source, r.cell("esl").line(), r.cell("esl").column(), w)));
         }
         return Optional.of(new Part(name, description, caseCode, dielectric, capacitance, esr, esl, mount, cost,
                 rating, tolerance, retention, maxCount));

@@ -46,7 +46,7 @@ final class CheckCommand implements Callable<Integer> {
         var bank = in.bank(bankFile, output.acceptLowRating);
         BankEvaluator judge = new BankEvaluator(in.scenario(), in.footprint());
         try (Searches progress = new Searches(spec.commandLine().getErr(), output.silent(), false)) {
-            CheckResult r = CheckResult.check(judge, output.footprint, bank, monteCarlo.settings(in.scenario()),
+            CheckResult r = CheckResult.check(judge, output.footprint, bank, monteCarlo.settings(in),
                     progress);
             CheckReport.write(r, target, spec.commandLine().getOut());
             return ExitCodes.of(r.verdict());

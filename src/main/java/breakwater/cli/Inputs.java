@@ -7,6 +7,8 @@ import breakwater.catalog.Part;
 import breakwater.design.CapacitorBank;
 import breakwater.design.VoltageRatings;
 import breakwater.diagnostic.Diagnostic;
+import breakwater.diagnostic.HiddenCharacters;
+import breakwater.diagnostic.TextFiles;
 import breakwater.diagnostic.InputException;
 import breakwater.diagnostic.Suggestions;
 import breakwater.scenario.Footprint;
@@ -28,7 +30,25 @@ record Inputs(Scenario scenario, Catalog catalog, Optional<Footprint> footprint,
 
     static Inputs load(Path scenarioFile, String footprintName) throws InputException, IOException {
         Inputs in = loadChecked(scenarioFile, footprintName);
-        return new Inputs(in.scenario(), in.catalog(), in.footprint(), caseWarnings(scenarioFile, in));
+        List<String> warnings = new java.util.ArrayList<>();
+        warnings.addAll(spaceWarnings(scenarioFile, display(scenarioFile), HiddenCharacters.Syntax.TOML));
+        warnings.addAll(spaceWarnings(in.scenario().catalogFile(), in.catalog().source(), HiddenCharacters.Syntax.CSV));
+        breakwater.scenario.ScenarioPlaces places = breakwater.scenario.ScenarioPlaces.of(scenarioFile,
+                display(scenarioFile));
+        breakwater.scenario.ScenarioRanges.warnings(in.scenario(), places).forEach(d -> warnings.add(d.render()));
+        in.catalog().warnings().forEach(d -> warnings.add(d.render()));
+        warnings.addAll(caseWarnings(scenarioFile, in));
+        return new Inputs(in.scenario(), in.catalog(), in.footprint(), warnings);
+    }
+
+    /**
+     * The no-break spaces between a number and its unit that the readers accepted as plain spaces
+     * ({@link HiddenCharacters}), as located warnings.
+     */
+    private static List<String> spaceWarnings(Path file, String shown, HiddenCharacters.Syntax syntax)
+            throws InputException, IOException {
+        return HiddenCharacters.scan(TextFiles.readUtf8(file, shown), shown, syntax).warnings().stream()
+                .map(Diagnostic::render).toList();
     }
 
     /**
@@ -155,6 +175,35 @@ record Inputs(Scenario scenario, Catalog catalog, Optional<Footprint> footprint,
         return rated;
     }
 
+    /**
+     * Refuses, as an input error at each part's catalog row, a capacitance tolerance that Monte Carlo
+     * samples cannot be drawn within ({@link breakwater.design.MonteCarlo#drawable}).
+     */
+    void checkTolerances(breakwater.design.MonteCarlo.ToleranceRule rule) throws InputException {
+        List<Diagnostic> problems = new java.util.ArrayList<>();
+        List<String> lines = null;
+        for (Part p : catalog.parts()) {
+            double t = rule.capacitanceTolerance(p);
+            if (!breakwater.design.MonteCarlo.drawable(t)) {
+                if (lines == null) {
+                    try {
+                        lines = Files.readAllLines(scenario.catalogFile(), java.nio.charset.StandardCharsets.UTF_8);
+                    } catch (IOException unreadable) {
+                        lines = List.of(); // read a moment ago; the message still names the file
+                    }
+                }
+                problems.add(Diagnostic.at(catalog.source(), lineOf(lines, p.name()), 1, "part " + p.name()
+                        + ": capacitance tolerance " + (Double.isFinite(t) ? String.format(java.util.Locale.ROOT,
+                        "%.4g %%", 100 * t) : "missing") + " cannot be drawn within for --monte-carlo, it must be "
+                        + "at least 0 % and below 100 %").withHint("give the part a tolerance such as 10 % in the "
+                        + "catalog's tolerance column"));
+            }
+        }
+        if (!problems.isEmpty()) {
+            throw new InputException(problems);
+        }
+    }
+
     /** The 1-based line of the first row whose first field is {@code name} (1 when none is found). */
     private static int lineOf(List<String> lines, String name) {
         for (int i = 0; i < lines.size(); i++) {
@@ -180,13 +229,59 @@ record Inputs(Scenario scenario, Catalog catalog, Optional<Footprint> footprint,
         }
         Path file = scenario.existingBank().orElseThrow(() -> new UsageException("trim needs a bank to start from: "
                 + "give --bank FILE, or name one in the scenario's [existing] section (file = \"my-bank.csv\")"));
+        // named inside the scenario: the scenario is what is wrong (a missing --bank is an I/O error)
+        if (Files.isDirectory(file)) {
+            throw placed(new InputException(List.of(Diagnostic.of(scenario.source(), "existing.file: names a folder ("
+                    + file + "), not a bank file").withHint("name the bank file itself (CSV: part,count), relative "
+                    + "to the scenario's folder; or give the bank with --bank FILE"))));
+        }
         if (!Files.isRegularFile(file)) {
-            // named inside the scenario: the scenario is what is wrong (a missing --bank is an I/O error)
-            throw new InputException(List.of(Diagnostic.of(scenario.source(), "existing.file: bank file not found "
-                    + "(looked for " + file + ")").withHint("the path is relative to the scenario's folder; or give "
-                    + "the bank with --bank FILE")));
+            throw placed(new InputException(List.of(Diagnostic.of(scenario.source(), "existing.file: bank file not "
+                    + "found (looked for " + file + ")").withHint("the path is relative to the scenario's folder; or "
+                    + "give the bank with --bank FILE"))));
+        }
+        if (!Files.isReadable(file)) {
+            throw placed(new InputException(List.of(Diagnostic.of(scenario.source(), "existing.file: the bank file "
+                    + file + " cannot be read (no permission)").withHint("make it readable, or give the bank with "
+                    + "--bank FILE"))));
         }
         return file;
+    }
+
+    private static final java.util.regex.Pattern KEY_FIRST =
+            java.util.regex.Pattern.compile("^([a-z_]+)\\.([a-z_]+)[: ]");
+
+    /**
+     * {@code e} with each of its scenario diagnostics that has no line, and whose message starts with the
+     * key it is about ({@code solver.margin ...}, {@code existing.file: ...}, {@code rail.edge_time: ...}),
+     * placed at that key's line and column in the scenario (at its section's header when the key is
+     * absent). Problems found after the scenario was read (by the judge, by a command) are so located
+     * like the reader's own.
+     */
+    static InputException placed(InputException e) {
+        boolean any = false;
+        List<Diagnostic> out = new java.util.ArrayList<>();
+        java.util.Map<String, Optional<breakwater.scenario.ScenarioPlaces>> places = new java.util.HashMap<>();
+        for (Diagnostic d : e.diagnostics()) {
+            java.util.regex.Matcher m = KEY_FIRST.matcher(d.message());
+            if (d.line() == 0 && d.source().endsWith(".toml") && m.find()) {
+                Optional<breakwater.scenario.ScenarioPlaces> p = places.computeIfAbsent(d.source(), s -> {
+                    try {
+                        return Optional.of(breakwater.scenario.ScenarioPlaces.of(Path.of(s), s));
+                    } catch (IOException | InputException | RuntimeException unreadable) {
+                        return Optional.empty(); // read a moment ago; left as it is
+                    }
+                });
+                if (p.isPresent()) {
+                    Diagnostic at = p.get().at(List.of(m.group(1), m.group(2)), d.message());
+                    out.add(at.withHint(d.hint()));
+                    any = true;
+                    continue;
+                }
+            }
+            out.add(d);
+        }
+        return any ? new InputException(out) : e;
     }
 
     /** The path as a user would recognise it: relative to the working folder when it lies below it. */

@@ -54,7 +54,7 @@ public final class Main implements Runnable {
      * Heap kept back for the last words: released before an internal error is reported, so that the
      * report of an out-of-memory error has room to be written (common practice for a program's last line).
      */
-    private static volatile byte[] reserve = new byte[256 * 1024];
+    private static volatile byte[] reserve = new byte[512 * 1024];
 
     /**
      * When this program started (the Java virtual machine's start), for a time limit that counts from
@@ -75,12 +75,103 @@ public final class Main implements Runnable {
         // a throwable on a thread of our own (progress, a solver) ends the run like one on the main thread;
         // the writer is made now, while there is memory for it
         PrintWriter lastWords = new PrintWriter(System.err, true, StandardCharsets.UTF_8);
+        // a worker of a parallel stream or of the solvers that dies (out of memory, say) ends the process:
+        // whatever the handler itself meets, the halt follows, so nothing waits for the dead worker's part.
+        // Halting loads the JVM's shutdown class on first use, which needs heap: load it now (a hook added
+        // and removed), or a halt out of memory fails inside the handler and the process lives on
+        Thread warm = new Thread(() -> { });
+        Runtime.getRuntime().addShutdownHook(warm);
+        Runtime.getRuntime().removeShutdownHook(warm);
         Thread.setDefaultUncaughtExceptionHandler((thread, ex) -> {
-            internalError(ex, lastWords, debug);
-            Runtime.getRuntime().halt(ExitCodes.INTERNAL);
+            try {
+                internalError(ex, lastWords, debug);
+            } finally {
+                lastResort(ex);
+                Runtime.getRuntime().halt(ExitCodes.INTERNAL);
+            }
         });
-        System.exit(run(args, System.out, System.err));
+        // the out-of-memory line as bytes, and a stream that writes them with no heap: the last resort
+        try {
+            java.io.FileOutputStream raw = new java.io.FileOutputStream(java.io.FileDescriptor.err);
+            raw.write(new byte[0]); // links the write path now
+            rawErr = raw;
+            String trace = debug ? "" : " --debug or " + DEBUG_ENV + "=1 shows the trace.";
+            outOfMemoryBytes = (OUT_OF_MEMORY_LINE + trace + System.lineSeparator()).getBytes(StandardCharsets.UTF_8);
+            internalErrorBytes = ("breakwater: internal error (a bug in breakwater, not in your input); please report it "
+                    + "with the command you ran." + trace + System.lineSeparator()).getBytes(StandardCharsets.UTF_8);
+        } catch (IOException | RuntimeException unusable) {
+            rawErr = null; // then the writer alone
+        }
+        // every call on the way to the last words is linked now: linking a call for the first time needs
+        // heap, and out of memory it fails (the line was lost so, now and then, before this)
+        try {
+            if (rawErr != null) {
+                rawErr.write(new byte[0]);
+                rawErr.flush();
+            }
+            outOfMemory(WARM_UP);
+            internalError(WARM_UP, lastWords, debug);
+            say(WARM_UP, lastWords, debug);
+            lastResort(WARM_UP);
+            Thread.onSpinWait();
+            System.nanoTime();
+        } catch (IOException | RuntimeException unusable) {
+            // the writer alone, as before
+        }
+        oneProcess = true;
+        int code = run(args, System.out, System.err);
+        if (code == ExitCodes.INTERNAL) {
+            lastResort(lastError);
+            // no shutdown hook or lingering worker may hold the end back
+            System.out.flush();
+            System.err.flush();
+            Runtime.getRuntime().halt(code);
+        }
+        System.exit(code);
     }
+
+    /**
+     * Set in {@link #main}: then the last words of an internal error are said once per process, however
+     * many threads meet an error at once (workers of a parallel stream running out of memory together).
+     */
+    private static volatile boolean oneProcess;
+    private static final Object LAST_WORDS = new Object();
+    /** Standard error as a plain file stream, and the out-of-memory line as bytes, made in {@link #main}. */
+    private static volatile java.io.OutputStream rawErr;
+    private static volatile byte[] outOfMemoryBytes;
+    private static volatile byte[] internalErrorBytes;
+    /** Passed once at the start to link the calls of the last words; each returns at once for it. */
+    private static final Throwable WARM_UP = new Error("warm-up", null, false, false) { };
+
+    /** The error last met by {@link #internalError}, for the last resort; null before any. */
+    private static volatile Throwable lastError;
+
+    /**
+     * Before the process ends on an internal error: when no line could be said (or the exit code came
+     * without one), the line made at the start, written with no heap; nothing when one was said.
+     */
+    private static void lastResort(Throwable ex) {
+        if (ex == WARM_UP) {
+            return;
+        }
+        try {
+            synchronized (LAST_WORDS) {
+                if (lastWordsSaid || rawErr == null) {
+                    return;
+                }
+                rawErr.write(ex == null || outOfMemory(ex) ? outOfMemoryBytes : internalErrorBytes);
+                rawErr.flush();
+                lastWordsSaid = true;
+            }
+        } catch (Throwable nothing) {
+            // the exit code still tells
+        }
+    }
+    private static boolean lastWordsSaid;
+
+    /** The out-of-memory line when even its own words find no room (no concatenation at that moment). */
+    private static final String OUT_OF_MEMORY_LINE = "breakwater: internal error: the Java heap ran out of memory; "
+            + "please report it with the command you ran; more heap may get round it (BREAKWATER_JAVA_OPTS=-Xmx4g).";
 
     /** Runs the command line in-process; returns the exit code. Used by tests too. */
     public static int run(String[] args, PrintStream out, PrintStream err) {
@@ -123,13 +214,79 @@ public final class Main implements Runnable {
      * out of memory gets its own words, since more heap may be the way round it.
      */
     static int internalError(Throwable ex, PrintWriter e, boolean debug) {
+        if (ex == WARM_UP) {
+            return ExitCodes.INTERNAL;
+        }
         reserve = null;
+        lastError = ex;
+        synchronized (LAST_WORDS) {
+            if (oneProcess && lastWordsSaid) {
+                return ExitCodes.INTERNAL;
+            }
+            // out of memory, the line itself may find no room at first: other threads that meet the error
+            // wait at the lock above, so memory comes free; a few tries, then the exit code alone tells
+            // (the wait spins: sleeping may itself need heap)
+            boolean said = false;
+            for (int attempt = 0; attempt < 50 && !(said = say(ex, e, debug)); attempt++) {
+                long until = System.nanoTime() + 20_000_000L;
+                while (System.nanoTime() < until) {
+                    Thread.onSpinWait();
+                }
+            }
+            lastWordsSaid = said;
+        }
+        return ExitCodes.INTERNAL;
+    }
+
+    /**
+     * Whether {@code ex} is the heap running out, itself or as the cause of another error (a class that
+     * could not be initialised, a call site that could not be linked, out of memory).
+     */
+    private static boolean outOfMemory(Throwable ex) {
+        Throwable t = ex;
+        for (int depth = 0; t != null && depth < 8; depth++, t = t.getCause()) {
+            if (t instanceof OutOfMemoryError) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** Prints the line (and the trace when asked); false when it could not be printed. */
+    private static boolean say(Throwable ex, PrintWriter e, boolean debug) {
+        if (ex == WARM_UP) {
+            return true;
+        }
         try {
-            if (ex instanceof OutOfMemoryError) {
-                e.println("breakwater: internal error: the Java heap ran out of memory (" + ex.getMessage()
-                        + "); please report it with the command you ran; more heap may get round it "
-                        + "(BREAKWATER_JAVA_OPTS=-Xmx4g)" + (debug ? "" : "; --debug or " + DEBUG_ENV
-                        + "=1 shows the trace") + ".");
+            if (outOfMemory(ex) && rawErr != null) {
+                // a process of its own: the bytes made at the start, written with no heap at all
+                e.flush();
+                rawErr.write(outOfMemoryBytes);
+                rawErr.flush();
+                if (debug) {
+                    try {
+                        ex.printStackTrace(e);
+                        e.flush();
+                    } catch (Throwable noRoom) {
+                        // the line is out; the trace needed more heap than there was
+                    }
+                }
+                return true;
+            }
+            if (outOfMemory(ex)) {
+                // built with a StringBuilder: a first string concatenation would link its call site, and
+                // that needs heap too
+                String line;
+                try {
+                    line = new StringBuilder("breakwater: internal error: the Java heap ran out of memory (")
+                            .append(ex.getMessage()).append("); please report it with the command you ran; more heap ")
+                            .append("may get round it (BREAKWATER_JAVA_OPTS=-Xmx4g)")
+                            .append(debug ? "" : "; --debug or BREAKWATER_DEBUG=1 shows the trace").append('.')
+                            .toString();
+                } catch (Throwable noRoom) {
+                    line = OUT_OF_MEMORY_LINE;
+                }
+                e.println(line);
             } else {
                 String what = ex.getClass().getSimpleName() + (ex.getMessage() == null ? "" : ": "
                         + firstLine(ex.getMessage()));
@@ -141,10 +298,19 @@ public final class Main implements Runnable {
                 ex.printStackTrace(e);
             }
             e.flush();
+            return !e.checkError(); // a writer that failed underneath says so only here
         } catch (Throwable again) {
-            // nothing more can be said; the exit code still tells
+            try {
+                if (outOfMemory(ex)) {
+                    e.println(OUT_OF_MEMORY_LINE);
+                    e.flush();
+                    return true;
+                }
+            } catch (Throwable still) {
+                // not now
+            }
+            return false;
         }
-        return ExitCodes.INTERNAL;
     }
 
     private static String firstLine(String s) {
@@ -175,7 +341,7 @@ public final class Main implements Runnable {
             if (unknownCommand(ex, cl)) {
                 return ExitCodes.USAGE;
             }
-            c.getErr().println("breakwater: " + ex.getMessage());
+            c.getErr().println("breakwater: " + plainWords(ex.getMessage()));
             CommandLine.UnmatchedArgumentException.printSuggestions(ex, c.getErr());
             c.getErr().println("Try 'breakwater " + (c == cl ? "" : c.getCommandName() + " ") + "--help'.");
             c.getErr().flush();
@@ -184,7 +350,8 @@ public final class Main implements Runnable {
         cl.setExecutionExceptionHandler((ex, c, parseResult) -> {
             PrintWriter e = c.getErr();
             int code = exitCodeFor(ex);
-            if (code == ExitCodes.INVALID_INPUT && ex instanceof InputException ie) {
+            if (code == ExitCodes.INVALID_INPUT && ex instanceof InputException found) {
+                InputException ie = Inputs.placed(found);
                 for (Diagnostic d : ie.diagnostics()) {
                     e.println(d.render());
                 }
@@ -201,6 +368,15 @@ public final class Main implements Runnable {
             return code;
         });
         return cl.execute(args);
+    }
+
+    /**
+     * picocli's message without Java's type names: "'x' is not a long" reads "'x' is not a whole number"
+     * (within the range Java keeps for it), "is not a double" reads "is not a number".
+     */
+    static String plainWords(String message) {
+        return message.replaceAll("' is not an? (int|long|short|byte|Integer|Long)\\b", "' is not a whole number (or too large)")
+                .replaceAll("' is not an? (double|float|Double|Float)\\b", "' is not a number");
     }
 
     /**

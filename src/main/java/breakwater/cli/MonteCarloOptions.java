@@ -1,6 +1,7 @@
 package breakwater.cli;
 
 import breakwater.design.MonteCarlo;
+import breakwater.diagnostic.InputException;
 import breakwater.scenario.Scenario;
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
@@ -67,15 +68,23 @@ final class MonteCarloOptions {
         return true;
     }
 
-    /** The draws asked for (seed: --mc-seed, else the scenario's [solver] seed), or none without --monte-carlo. */
-    Optional<MonteCarlo.Settings> settings(Scenario scenario) {
+    /**
+     * The draws asked for (seed: --mc-seed, else the scenario's [solver] seed), or none without --monte-carlo.
+     *
+     * @throws InputException before any work, when a catalog part's capacitance tolerance cannot be drawn
+     *                        within, located at the part's row
+     */
+    Optional<MonteCarlo.Settings> settings(Inputs in) throws InputException {
         if (!enabled()) {
             return Optional.empty();
         }
-        return Optional.of(new MonteCarlo.Settings(samples, seed != null ? seed : scenario.solver().seed(),
+        Scenario scenario = in.scenario();
+        MonteCarlo.Settings s = new MonteCarlo.Settings(samples, seed != null ? seed : scenario.solver().seed(),
                 spreadFraction, mountSpreadFraction,
                 new MonteCarlo.StackupSpread(planeSpreadFraction, packageSpreadFraction, dieSpreadFraction),
-                MonteCarlo.CATALOG_OR_DIELECTRIC));
+                MonteCarlo.CATALOG_OR_DIELECTRIC);
+        in.checkTolerances(s.tolerance());
+        return Optional.of(s);
     }
 
     /** "20", "20%", "20 %" are all 20 %. */

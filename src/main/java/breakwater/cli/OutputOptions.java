@@ -62,7 +62,8 @@ final class OutputOptions {
                 throw new java.io.UncheckedIOException(e);
             }
         }
-        return new ResultWriter.Target(json, quiet, outDir(), out == null ? "" : Inputs.display(out), java.util.List.of());
+        return new ResultWriter.Target(json, quiet, outDir(), out == null ? "" : Inputs.display(out), java.util.List.of())
+                .withLowRatingAccepted(acceptLowRating);
     }
 
     /** No progress on the error stream: --quiet, or --json (the JSON alone on standard output). */

@@ -73,7 +73,7 @@ final class SolveCommand implements Callable<Integer> {
         target = target.withWarnings(in.warnings());
         BankEvaluator judge = new BankEvaluator(in.scenario(), in.footprint());
         var settings = search.settings(in.scenario());
-        var draws = monteCarlo.settings(in.scenario());
+        var draws = monteCarlo.settings(in);
         // progress stays on the error stream with --json (only --quiet silences it)
         try (Searches progress = new Searches(spec.commandLine().getErr(), output.quiet, true)) {
             SolveResult r = SolveResult.solve(judge, output.footprint, in.searchParts(output.acceptLowRating), settings,

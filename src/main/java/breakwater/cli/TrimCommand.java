@@ -86,7 +86,7 @@ final class TrimCommand implements Callable<Integer> {
         var existing = in.bank(file, output.acceptLowRating);
         BankEvaluator judge = new BankEvaluator(in.scenario(), in.footprint());
         var settings = search.settings(in.scenario());
-        var draws = monteCarlo.settings(in.scenario());
+        var draws = monteCarlo.settings(in);
         try (Searches progress = new Searches(spec.commandLine().getErr(), output.silent(), true)) {
             TrimResult r = TrimResult.trim(judge, output.footprint, Inputs.display(file), existing, keep, noNewParts,
                     in.searchParts(output.acceptLowRating), settings, draws, progress);

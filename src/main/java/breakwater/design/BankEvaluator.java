@@ -49,7 +49,7 @@ public final class BankEvaluator {
         PowerNetwork fixed = NetworkBuilder.build(scenario, java.util.List.of(), footprint);
         if (!scenario.rail().hasEdgeTime() && !fixed.hasFiniteHighFrequencyLimit()) {
             throw new InputException(Diagnostic.of(scenario.source(),
-                    "with ideal load edges (rail.edge_time absent or 0) the worst case is unbounded here: the load node has "
+                    "rail.edge_time: with ideal load edges (edge_time absent or 0) the worst case is unbounded here: the load node has "
                             + "no capacitance without series inductance, so the load sees an inductance at the "
                             + "highest frequencies and an instant current step causes an unbounded spike")
                     .withHint("set rail.edge_time to the fastest load swing (e.g. edge_time = \"1 ns\"), or add a "

@@ -270,7 +270,7 @@ public final class MonteCarlo {
         for (int i = 0; i < n; i++) {
             Part p = entries.get(i).part();
             tol[i] = settings.tolerance().capacitanceTolerance(p);
-            if (!(tol[i] >= 0 && tol[i] < 1)) {
+            if (!drawable(tol[i])) {
                 throw new IllegalArgumentException(p.name() + ": capacitance tolerance must be in 0 .. 100 % "
                         + "(exclusive) for Monte Carlo, got " + tol[i]);
             }
@@ -304,6 +304,14 @@ public final class MonteCarlo {
         WorstCaseVolts nominal = evaluator.worstCaseVolts(
                 NetworkBuilder.build(evaluator.scenario(), entries, evaluator.footprint()));
         return new Result(settings, spreads, nominal, droop, over, passing, (System.nanoTime() - t0) / 1e9);
+    }
+
+    /**
+     * Whether samples can be drawn within a capacitance tolerance: 0 to 100 %, 100 % excluded (a draw
+     * could take C to nothing).
+     */
+    public static boolean drawable(double toleranceFraction) {
+        return toleranceFraction >= 0 && toleranceFraction < 1;
     }
 
     /** The yield of a Monte Carlo run, when there was one. */

@@ -50,6 +50,7 @@ public final class VoltageRatings {
     }
 
     static String trim(double v) {
-        return String.format(Locale.ROOT, "%.4g", v).replaceFirst("\\.?0+$", "");
+        String s = String.format(Locale.ROOT, "%.4g", v);
+        return s.contains(".") && !s.contains("e") ? s.replaceFirst("\\.?0+$", "") : s; // 1000 stays 1000
     }
 }

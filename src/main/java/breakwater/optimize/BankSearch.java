@@ -181,7 +181,14 @@ public final class BankSearch {
         try {
             for (int k = 0; k < settings.solvers(); k++) {
                 int worker = k;
-                futures.add(exec.submit(() -> worker(worker, settings, startCounts)));
+                futures.add(exec.submit(() -> {
+                    try {
+                        return worker(worker, settings, startCounts);
+                    } catch (Error e) { // out of memory, say: the other solvers stop, the error reaches the caller
+                        stop();
+                        throw e;
+                    }
+                }));
             }
             int[] best = null;
             BendableScore bestOfAll = null;
@@ -216,6 +223,9 @@ public final class BankSearch {
             Throwable cause = e.getCause();
             if (cause instanceof RuntimeException re) {
                 throw re;
+            }
+            if (cause instanceof Error err) {
+                throw err;
             }
             throw new IllegalStateException("solver failed", cause);
         } finally {

@@ -40,9 +40,13 @@ public final class ResultWriter {
      * @param exports    the files for other tools to write beside the results (SPICE decks, Touchstone)
      * @param warnings   what the inputs allow but a careful reader should know, each a located message;
      *                   shown in the console, summary.json {@code warnings[]} and the report's cautions
+     * @param lowRatingAccepted parts rated below the rail's highest voltage were let in
+     *                   ({@code --accept-low-rating}): said before the verdict, first among the report's
+     *                   cautions and in {@code warnings[]}; otherwise the report's cautions say what the
+     *                   rating check held each part to
      */
     public record Target(boolean json, boolean quiet, Optional<Path> outDir, String outDirName,
-                         List<ExportFormat> exports, List<String> warnings) {
+                         List<ExportFormat> exports, List<String> warnings, boolean lowRatingAccepted) {
         public Target {
             Objects.requireNonNull(outDir, "outDir");
             Objects.requireNonNull(outDirName, "outDirName");
@@ -55,18 +59,23 @@ public final class ResultWriter {
 
         /** The same target, also writing {@code formats}. */
         public Target withExports(List<ExportFormat> formats) {
-            return new Target(json, quiet, outDir, outDirName, formats, warnings);
+            return new Target(json, quiet, outDir, outDirName, formats, warnings, lowRatingAccepted);
         }
 
         public Target(boolean json, boolean quiet, Optional<Path> outDir, String outDirName, List<ExportFormat> exports) {
-            this(json, quiet, outDir, outDirName, exports, List.of());
+            this(json, quiet, outDir, outDirName, exports, List.of(), false);
         }
 
         /** The same target, with {@code more} warnings after its own. */
         public Target withWarnings(List<String> more) {
             List<String> all = new ArrayList<>(warnings);
             all.addAll(more);
-            return new Target(json, quiet, outDir, outDirName, exports, all);
+            return new Target(json, quiet, outDir, outDirName, exports, all, lowRatingAccepted);
+        }
+
+        /** The same target, saying that parts rated below the rail were let in ({@code accepted}) or not. */
+        public Target withLowRatingAccepted(boolean accepted) {
+            return new Target(json, quiet, outDir, outDirName, exports, warnings, accepted);
         }
     }
 
@@ -89,6 +98,10 @@ public final class ResultWriter {
         run.search().ifPresent(r -> SummaryJson.solver(summary, r));
         mode.summary().accept(summary);
         var warned = summary.putArray("warnings");
+        String notEnforced = target.lowRatingAccepted() ? RatingsNote.notEnforced(scenario, e) : "";
+        if (!notEnforced.isEmpty()) {
+            warned.add(notEnforced);
+        }
         target.warnings().forEach(warned::add);
         if (target.json()) {
             StringWriter sw = new StringWriter();
@@ -111,6 +124,9 @@ public final class ResultWriter {
                 target.warnings().forEach(w -> out.println("  " + w));
                 out.println();
             }
+            if (!notEnforced.isEmpty()) {
+                out.println(notEnforced + ".");
+            }
             out.print(Verdicts.console(run.verdict()));
         }
         if (target.outDir().isPresent()) {
@@ -130,9 +146,18 @@ public final class ResultWriter {
             ReportModel built = mode.model().apply(ReportBuilder.build(new ReportBuilder.Run(run.mode(), scenario,
                     run.footprintName(), e, run.verdict(), droop, overshoot, run.search(), mode.sections())));
             List<String> cautions = new ArrayList<>(built.cautions());
+            if (!notEnforced.isEmpty()) {
+                cautions.add(0, notEnforced + ".");
+            } else {
+                cautions.add(RatingsNote.checked(scenario, e));
+            }
             target.warnings().forEach(w -> cautions.add("Warning: " + w));
-            ReportModel model = target.warnings().isEmpty() ? built : new ReportModel(built.title(),
-                    built.subtitleLines(), built.verdict(), built.keyFigures(), built.impedance(), built.worstCase(),
+            List<String> subtitle = new ArrayList<>(built.subtitleLines());
+            if (!notEnforced.isEmpty()) {
+                subtitle.add(notEnforced + "."); // at the top too, where the rail is named
+            }
+            ReportModel model = new ReportModel(built.title(),
+                    subtitle, built.verdict(), built.keyFigures(), built.impedance(), built.worstCase(),
                     built.bom(), built.resonances(), built.sections(), built.settings(), cautions);
             dir.write("impedance.svg", w -> w.write(ImpedanceChart.svg(model.impedance())));
             written.add("impedance.svg");

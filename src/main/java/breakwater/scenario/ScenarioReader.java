@@ -2,6 +2,7 @@ package breakwater.scenario;
 
 import breakwater.diagnostic.Diagnostic;
 import breakwater.diagnostic.Diagnostics;
+import breakwater.diagnostic.HiddenCharacters;
 import breakwater.diagnostic.InputException;
 import breakwater.diagnostic.Suggestions;
 import breakwater.diagnostic.TextFiles;
@@ -93,7 +94,7 @@ public final class ScenarioReader {
      * @throws IOException    if the file cannot be read
      */
     public static Scenario read(Path file, String displayName) throws InputException, IOException {
-        String text = TextFiles.readUtf8(file, displayName);
+        String text = TextFiles.readUtf8(file, displayName, "a scenario file (TOML)");
         Path dir = file.getParent() == null ? Path.of("") : file.getParent();
         return parse(text, dir, displayName);
     }
@@ -105,12 +106,14 @@ public final class ScenarioReader {
      */
     public static Scenario parse(String tomlText, Path scenarioDir, String displayName) throws InputException {
         String text = !tomlText.isEmpty() && tomlText.charAt(0) == '\uFEFF' ? tomlText.substring(1) : tomlText;
+        TextFiles.checkLines(text, displayName);
+        text = HiddenCharacters.scan(text, displayName, HiddenCharacters.Syntax.TOML).textOrThrow();
         TomlLocator locator = new TomlLocator(text);
         JsonNode root;
         try {
             root = new TomlMapper().readTree(text);
         } catch (JsonProcessingException e) {
-            throw new InputException(syntaxError(e, locator, displayName));
+            throw new InputException(syntaxError(e, locator, text, displayName));
         }
         if (root == null || !root.isObject()) {
             root = new TomlMapper().createObjectNode();
@@ -118,18 +121,90 @@ public final class ScenarioReader {
         return new Reading(displayName, scenarioDir, locator, (ObjectNode) root).scenario();
     }
 
-    private static Diagnostic syntaxError(JsonProcessingException e, TomlLocator locator, String source) {
+    private static Diagnostic syntaxError(JsonProcessingException e, TomlLocator locator, String text, String source) {
         String what = e.getOriginalMessage() == null ? "syntax error" : e.getOriginalMessage().strip();
         JsonLocation at = e.getLocation();
         int line = at == null ? 0 : Math.max(0, at.getLineNr());
         int column = at == null ? 0 : Math.max(0, at.getColumnNr());
-        if (what.toLowerCase(java.util.Locale.ROOT).contains("duplicate") && locator.firstDuplicate().isPresent()) {
-            line = locator.firstDuplicate().get().line();
-            column = locator.firstDuplicate().get().column();
+        String lower = what.toLowerCase(java.util.Locale.ROOT);
+        if (line == 0 && lower.contains("nesting depth")) {
+            line = deepestLine(text);
+            column = 0;
         }
-        String lower = what.isEmpty() ? what : Character.toLowerCase(what.charAt(0)) + what.substring(1);
-        return Diagnostic.at(source, line, column, "not valid TOML: " + lower
+        if (lower.contains("duplicate") || lower.contains("redefined") || lower.contains("existing non-object")) {
+            Optional<TomlLocator.Duplicate> twice = locator.firstDuplicate();
+            if (twice.isPresent()) {
+                TomlLocator.Duplicate d = twice.get();
+                String name = String.join(".", d.path());
+                return Diagnostic.at(source, d.at().line(), d.at().column(), d.table()
+                        ? "[" + name + "] is defined twice; first at line " + d.firstLine() + ". Merge the two tables"
+                        : name + " is given twice; first at line " + d.firstLine() + ". Keep one of the two lines");
+            }
+            return Diagnostic.at(source, line, column, "a key or table is defined twice (TOML allows each once)");
+        }
+        return Diagnostic.at(source, line, column, "not valid TOML: " + ownWords(what)
                 + ", a scenario is TOML: [section] headers, key = value lines, strings in double quotes");
+    }
+
+    /** The 1-based line where brackets and braces outside strings and comments nest deepest (1 if none). */
+    static int deepestLine(String text) {
+        int depth = 0;
+        int deepest = 0;
+        int deepestLine = 1;
+        int line = 1;
+        char quote = 0;
+        boolean comment = false;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c == '\n') {
+                line++;
+                comment = false;
+                continue;
+            }
+            if (comment) {
+                continue;
+            }
+            if (quote != 0) {
+                if (c == '\\' && quote == '"') {
+                    i++;
+                } else if (c == quote) {
+                    quote = 0;
+                }
+            } else if (c == '#') {
+                comment = true;
+            } else if (c == '"' || c == '\'') {
+                quote = c;
+            } else if (c == '[' || c == '{') {
+                if (++depth > deepest) {
+                    deepest = depth;
+                    deepestLine = line;
+                }
+            } else if (c == ']' || c == '}') {
+                depth = Math.max(0, depth - 1);
+            }
+        }
+        return deepestLine;
+    }
+
+    /**
+     * The parser's message in our words: its limits (nesting depth, lengths of names, strings and
+     * numbers) said plainly, without the parser's setting names; anything else lower-cased as it is.
+     */
+    static String ownWords(String parserMessage) {
+        String m = parserMessage.toLowerCase(java.util.Locale.ROOT);
+        if (m.contains("nesting depth")) {
+            return "arrays or inline tables nested too deeply (a scenario needs at most two levels inside a key)";
+        }
+        if (m.contains("exceeds the maximum") || m.contains("exceeds the maximum allowed")) {
+            String what = m.contains("name") ? "a key" : m.contains("number") ? "a number" : "a value";
+            return what + " too long to read (a scenario's keys and values are a few words)";
+        }
+        if (m.contains("premature end of file") || m.contains("unexpected end")) {
+            return "the file ends inside a value: a closing quote (three quotes for a multi-line string), bracket or "
+                    + "brace is missing";
+        }
+        String cut = parserMessage.replaceAll("\\s*\\(from `[^`]*`\\)", "").replaceAll("`[^`]*`", "").strip();
+        return cut.isEmpty() ? "syntax error" : Character.toLowerCase(cut.charAt(0)) + cut.substring(1);
     }
 
     /** One pass over the parsed tree, collecting every problem. */
@@ -676,6 +751,11 @@ public final class ScenarioReader {
             }
             Path resolved = found.get();
             JsonNode n = section(section).orElseThrow().get(key);
+            if (Files.isDirectory(resolved)) {
+                valueError(path, what + " \"" + n.asText() + "\" is a folder (" + resolved + "), not a file; "
+                        + section + "." + key + " names the file itself, relative to the scenario's folder");
+                return Optional.empty();
+            }
             if (!Files.isRegularFile(resolved)) {
                 valueError(path, what + " \"" + n.asText() + "\" not found (looked for " + resolved
                         + "), the path is relative to the scenario's folder");

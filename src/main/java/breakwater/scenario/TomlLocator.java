@@ -25,7 +25,14 @@ final class TomlLocator {
     private final Map<List<String>, Pos> headers = new HashMap<>();
     private final Map<List<String>, Pos> keys = new HashMap<>();
     private final Map<List<String>, Pos> values = new HashMap<>();
-    private Pos firstDuplicate;
+    private Duplicate firstDuplicate;
+
+    /**
+     * A key or table defined a second time: its path, whether the second definition is a table header,
+     * where it is (the header's {@code [}, or the key) and the line of the first definition.
+     */
+    record Duplicate(List<String> path, boolean table, Pos at, int firstLine) {
+    }
 
     TomlLocator(String text) {
         String[] lines = text.split("\n", -1);
@@ -55,8 +62,10 @@ final class TomlLocator {
                 if (header.isPresent()) {
                     table = header.get().segments();
                     Pos p = pos(ln, line, start);
-                    if (headers.containsKey(table) && !arrayTable) {
-                        noteDuplicate(p);
+                    if (!arrayTable && headers.containsKey(table)) {
+                        noteDuplicate(new Duplicate(table, true, pos(ln, line, i), headers.get(table).line()));
+                    } else if (!arrayTable && keys.containsKey(table)) {
+                        noteDuplicate(new Duplicate(table, true, pos(ln, line, i), keys.get(table).line()));
                     }
                     headers.putIfAbsent(table, p);
                 }
@@ -75,7 +84,9 @@ final class TomlLocator {
             path.addAll(key.get().segments());
             path = List.copyOf(path);
             if (keys.containsKey(path)) {
-                noteDuplicate(pos(ln, line, i));
+                noteDuplicate(new Duplicate(path, false, pos(ln, line, i), keys.get(path).line()));
+            } else if (headers.containsKey(path)) {
+                noteDuplicate(new Duplicate(path, false, pos(ln, line, i), headers.get(path).line()));
             }
             keys.putIfAbsent(path, pos(ln, line, i));
             values.putIfAbsent(path, pos(ln, line, v));
@@ -114,14 +125,14 @@ final class TomlLocator {
         return p != null ? p : key(path);
     }
 
-    /** The second declaration of a key or table seen twice, if any. */
-    Optional<Pos> firstDuplicate() {
+    /** The first key or table seen defined twice, if any. */
+    Optional<Duplicate> firstDuplicate() {
         return Optional.ofNullable(firstDuplicate);
     }
 
-    private void noteDuplicate(Pos p) {
+    private void noteDuplicate(Duplicate d) {
         if (firstDuplicate == null) {
-            firstDuplicate = p;
+            firstDuplicate = d;
         }
     }
 

@@ -28,6 +28,9 @@ public final class EngineeringNotation {
 
     private static final String[] OUT_PREFIX = {"f", "p", "n", "µ", "m", "", "k", "M", "G"};
 
+    /** The longest value read, in characters: a number with its unit never needs more. */
+    public static final int MAX_LENGTH = 64;
+
     private EngineeringNotation() {
     }
 
@@ -41,6 +44,10 @@ public final class EngineeringNotation {
             throw new NotationException("empty value where " + withArticle(quantity) + " is expected");
         }
         String s = text.strip();
+        if (s.length() > MAX_LENGTH) {
+            throw new NotationException("a value of " + s.length() + " characters ('" + s.substring(0, 24)
+                    + "...'), longer than any number with its unit (at most " + MAX_LENGTH + ")");
+        }
         double value = parseInner(s, quantity);
         if (!Double.isFinite(value)) {
             throw new NotationException("'" + text + "' is not a finite number");

@@ -57,6 +57,27 @@ class HardLimitsIT {
         assertThat(traced.err()).contains("java.lang.OutOfMemoryError", "\tat ");
     }
 
+    /**
+     * Out of memory inside the Monte Carlo's parallel stream: 64 workers (the common pool widened) each need
+     * their own workspace, which a 14 MB heap cannot hold while the main thread's judgement fits (found by
+     * trying). Workers die on their own threads, some while starting; the run must still end, at once, with
+     * exit 70 and one line, never hang on a dead worker's part or print the JVM's own words.
+     */
+    @Test
+    void outOfMemoryInParallelWorkersIsExit70WithOneLine(@TempDir Path dir) throws Exception {
+        String[] args = {"check", "scenarios/drone-core.toml", "--bank", "scenarios/drone-core.bank.csv", "--quiet",
+            "--monte-carlo", "20000"};
+        for (int round = 0; round < 3; round++) {
+            LauncherIT.Result r = launch(dir, Map.of("BREAKWATER_JAVA_OPTS",
+                    "-Xmx14m -Djava.util.concurrent.ForkJoinPool.common.parallelism=64"), args);
+            assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.INTERNAL);
+            assertThat(r.err().lines().filter(l -> !l.isBlank())).as(r.err()).hasSize(1);
+            assertThat(r.err()).contains("internal error", "ran out of memory")
+                    .doesNotContain("Exception", "UncaughtExceptionHandler", "\tat ");
+            assertThat(r.out()).isEmpty();
+        }
+    }
+
     /** Two runs of different rails into one --out at once: the folder ends with one run's files, whole. */
     @Test
     void twoRunsIntoOneFolderLeaveOneWholeSet(@TempDir Path dir) throws Exception {

@@ -241,7 +241,27 @@ class ScenarioReaderTest {
     @Test
     void duplicateKeyIsLocatedAtTheSecondOne() {
         assertThat(onlyProblem("[rail]\nvoltage = 1\nvoltage = 2\n"))
-                .startsWith("rail.toml:3:1: ").contains("not valid TOML", "duplicate");
+                .isEqualTo("rail.toml:3:1: rail.voltage is given twice; first at line 2. Keep one of the two lines");
+    }
+
+    @Test
+    void aTableDefinedTwiceOrAgainAfterADottedKeyNamesItsFirstLine() {
+        assertThat(onlyProblem("[rail]\nvoltage = 1\n\n[band]\nfrom = 1\n[rail]\nname = \"x\"\n"))
+                .isEqualTo("rail.toml:6:1: [rail] is defined twice; first at line 1. Merge the two tables");
+        assertThat(onlyProblem("[board]\nmax_per_case = { 0402 = 3 }\n[board.max_per_case]\n0603 = 2\n"))
+                .startsWith("rail.toml:3:1: [board.max_per_case] is defined twice; first at line 2");
+    }
+
+    @Test
+    void theParsersLimitsAreSaidWithoutItsSettingNames() {
+        // Jackson's own text names its setting in backquotes; the message keeps what it means only
+        assertThat(ScenarioReader.ownWords("Number value length (1500) exceeds the maximum allowed (1000, from "
+                + "`StreamReadConstraints.getMaxNumberLength()`)")).isEqualTo("a number too long to read (a scenario's "
+                + "keys and values are a few words)");
+        assertThat(ScenarioReader.ownWords("Document nesting depth (1001) exceeds the maximum allowed (1000, from "
+                + "`StreamReadConstraints.getMaxNestingDepth()`)")).startsWith("arrays or inline tables nested too deeply");
+        assertThat(ScenarioReader.ownWords("Unknown token")).isEqualTo("unknown token");
+        assertThat(ScenarioReader.deepestLine("[rail]\nx = 1\ny = [[[1]]] # [[[[[[\nz = \"[[[[[[\"\n")).isEqualTo(3);
     }
 
     @Test
