@@ -30,8 +30,11 @@ final class SearchOptions {
     SearchSettings settings(Scenario scenario) {
         Duration limit = timeLimit != null ? timeLimit : scenario.solver().timeLimit();
         // the limit counts from the program's start: reading the inputs is part of the time promised
-        Duration spent = Main.programStart().map(t -> Duration.between(t, java.time.Instant.now()))
-                .orElse(Duration.ZERO);
+        // and for the judging and writing of the best bank after the search: a program leaves those a tenth
+        // of the limit, at most half a second (about what they take on the demo rails)
+        Duration whole = limit;
+        Duration spent = Main.programStart().map(t -> Duration.between(t, java.time.Instant.now())
+                .plusMillis(Math.min(500, whole.toMillis() / 10))).orElse(Duration.ZERO);
         limit = spent.isNegative() ? limit : limit.minus(spent);
         if (limit.compareTo(Duration.ofMillis(1)) < 0) {
             limit = Duration.ofMillis(1); // no time left: the search ends at once with the bank it starts from
