@@ -75,8 +75,6 @@ public record ReachBound(boolean outOfReach, double frequencyHz, double leastImp
         double allowedOver = evaluator.limits().upperV() - vop;
         double zt = rail.targetImpedanceOhms();
         long budget = s.board().maxPartsLimit().isPresent() ? s.board().maxParts() : Long.MAX_VALUE;
-        long all = Arrays.stream(maxCounts).asLongStream().sum();
-        boolean budgetBinds = budget < all;
 
         double lo = Math.max(1.0, s.band().fromHz() / 100);
         double hi = s.band().toHz() * 100;
@@ -87,71 +85,10 @@ public record ReachBound(boolean outOfReach, double frequencyHz, double leastImp
             hi = lo * 10;
         }
         double[] fs = FrequencyGrid.logarithmic(lo, hi, POINTS_PER_DECADE).frequenciesHz();
-        double[] yRe = new double[n];
-        double[] yIm = new double[n];
-        double[] y = new double[2];
-        double[] v = new double[n];
-        long[] keys = new long[n];
-        double[] vx = new double[DIRECTIONS];
-        double[] vy = new double[DIRECTIONS];
-        double[] h = new double[DIRECTIONS];
-
         ReachBound worst = null;
         double worstScore = Double.NEGATIVE_INFINITY;
         for (double f : fs) {
-            double w = 2 * Math.PI * f;
-            for (int i = 0; i < n; i++) {
-                unit[i].admittance(w, y);
-                yRe[i] = y[0];
-                yIm[i] = y[1];
-            }
-            // support of the bank polygon in each direction θ: the most of Re(Y·e^{−jθ}) any counts reach
-            for (int k = 0; k < DIRECTIONS; k++) {
-                double th = 2 * Math.PI * k / DIRECTIONS;
-                double c = Math.cos(th);
-                double sn = Math.sin(th);
-                double sum = 0;
-                if (!budgetBinds) {
-                    for (int i = 0; i < n; i++) {
-                        double vi = yRe[i] * c + yIm[i] * sn;
-                        if (vi > 0) {
-                            sum += maxCounts[i] * vi;
-                        }
-                    }
-                } else {
-                    // the positive values, largest first: sorted as primitive keys (the value's float bits
-                    // above the index; a positive float's bits order as the float does)
-                    int m = 0;
-                    for (int i = 0; i < n; i++) {
-                        v[i] = yRe[i] * c + yIm[i] * sn;
-                        if (v[i] > 0 && maxCounts[i] > 0) {
-                            keys[m++] = ((long) Float.floatToIntBits((float) v[i]) << 32) | i;
-                        }
-                    }
-                    Arrays.sort(keys, 0, m);
-                    long left = budget;
-                    for (int idx = m - 1; idx >= 0 && left > 0; idx--) {
-                        int i = (int) keys[idx];
-                        long take = Math.min(left, maxCounts[i]);
-                        sum += take * v[i];
-                        left -= take;
-                    }
-                    // the float order may swap values that agree to 1e-7: the sum can fall short of the
-                    // greatest by less than that share, so widen it (a larger polygon keeps the bound a bound)
-                    sum *= 1 + 1e-6;
-                }
-                h[k] = sum;
-            }
-            // the outer polygon's vertices: consecutive support lines meet
-            for (int k = 0; k < DIRECTIONS; k++) {
-                int k1 = (k + 1) % DIRECTIONS;
-                double t0 = 2 * Math.PI * k / DIRECTIONS;
-                double t1 = 2 * Math.PI * (k + 1) / DIRECTIONS;
-                double det = Math.sin(t1 - t0);
-                vx[k] = (h[k] * Math.sin(t1) - h[k1] * Math.sin(t0)) / det;
-                vy[k] = (h[k1] * Math.cos(t0) - h[k] * Math.cos(t1)) / det;
-            }
-            double zMin = leastImpedance(fixed, w, vx, vy);
+            double zMin = leastImpedanceAt(fixed, unit, maxCounts, budget, f);
             double sinc = te > 0 ? Math.abs(Math.sin(Math.PI * f * te) / (Math.PI * f * te)) : 1.0;
             double droop = dI / 2 * (z0 + sinc * zMin);
             double over = dI / 2 * (sinc * zMin - z0);
@@ -170,6 +107,77 @@ public record ReachBound(boolean outOfReach, double frequencyHz, double leastImp
             }
         }
         return Optional.ofNullable(worst);
+    }
+
+    /**
+     * The least |Z| at the load at {@code f} over every bank of {@code unit} parts with 0 … maxCounts[i] of
+     * each and at most {@code budget} in all: the outer polygon of the banks' admittances from
+     * {@value #DIRECTIONS} support lines, then {@link #leastImpedance(PowerNetwork, double, double[], double[])}.
+     */
+    static double leastImpedanceAt(PowerNetwork fixed, SeriesBranch[] unit, int[] maxCounts, long budget, double f) {
+        int n = unit.length;
+        boolean budgetBinds = budget < Arrays.stream(maxCounts).asLongStream().sum();
+        double[] yRe = new double[n];
+        double[] yIm = new double[n];
+        double[] y = new double[2];
+        double[] v = new double[n];
+        long[] keys = new long[n];
+        double[] vx = new double[DIRECTIONS];
+        double[] vy = new double[DIRECTIONS];
+        double[] h = new double[DIRECTIONS];
+        double w = 2 * Math.PI * f;
+        for (int i = 0; i < n; i++) {
+            unit[i].admittance(w, y);
+            yRe[i] = y[0];
+            yIm[i] = y[1];
+        }
+        // support of the bank polygon in each direction θ: the most of Re(Y·e^{−jθ}) any counts reach
+        for (int k = 0; k < DIRECTIONS; k++) {
+            double th = 2 * Math.PI * k / DIRECTIONS;
+            double c = Math.cos(th);
+            double sn = Math.sin(th);
+            double sum = 0;
+            if (!budgetBinds) {
+                for (int i = 0; i < n; i++) {
+                    double vi = yRe[i] * c + yIm[i] * sn;
+                    if (vi > 0) {
+                        sum += maxCounts[i] * vi;
+                    }
+                }
+            } else {
+                // the positive values, largest first: sorted as primitive keys (the value's float bits
+                // above the index; a positive float's bits order as the float does)
+                int m = 0;
+                for (int i = 0; i < n; i++) {
+                    v[i] = yRe[i] * c + yIm[i] * sn;
+                    if (v[i] > 0 && maxCounts[i] > 0) {
+                        keys[m++] = ((long) Float.floatToIntBits((float) v[i]) << 32) | i;
+                    }
+                }
+                Arrays.sort(keys, 0, m);
+                long left = budget;
+                for (int idx = m - 1; idx >= 0 && left > 0; idx--) {
+                    int i = (int) keys[idx];
+                    long take = Math.min(left, maxCounts[i]);
+                    sum += take * v[i];
+                    left -= take;
+                }
+                // the float order may swap values that agree to 1e-7: the sum can fall short of the
+                // greatest by less than that share, so widen it (a larger polygon keeps the bound a bound)
+                sum *= 1 + 1e-6;
+            }
+            h[k] = sum;
+        }
+        // the outer polygon's vertices: consecutive support lines meet
+        for (int k = 0; k < DIRECTIONS; k++) {
+            int k1 = (k + 1) % DIRECTIONS;
+            double t0 = 2 * Math.PI * k / DIRECTIONS;
+            double t1 = 2 * Math.PI * (k + 1) / DIRECTIONS;
+            double det = Math.sin(t1 - t0);
+            vx[k] = (h[k] * Math.sin(t1) - h[k1] * Math.sin(t0)) / det;
+            vy[k] = (h[k1] * Math.cos(t0) - h[k] * Math.cos(t1)) / det;
+        }
+        return leastImpedance(fixed, w, vx, vy);
     }
 
     /**

@@ -86,46 +86,11 @@ class ReachBoundTest {
 
     /** The bound's least impedance at one frequency, from its polygon construction. */
     static double leastImpedance(BankEvaluator ev, Candidates c, int maxParts, double f) {
-        // a band of one frequency: the bound's grid then starts at f/100; read it at f through a tiny band
-        Scenario s = ev.scenario();
-        PowerNetwork fixed = NetworkBuilder.build(s, List.of(), Optional.empty());
-        double w = 2 * Math.PI * f;
-        int k = ReachBound.DIRECTIONS;
-        double[] vx = new double[k];
-        double[] vy = new double[k];
-        double[] h = new double[k];
-        double[] y = new double[2];
-        for (int d = 0; d < k; d++) {
-            double th = 2 * Math.PI * d / k;
-            // the support by brute force over the box corners' greedy fill (same definition, written again)
-            double[] v = new double[PARTS.size()];
-            for (int i = 0; i < v.length; i++) {
-                breakwater.network.PartBranches.single(PARTS.get(i), Optional.empty()).admittance(w, y);
-                v[i] = y[0] * Math.cos(th) + y[1] * Math.sin(th);
-            }
-            Integer[] order = {0, 1, 2, 3};
-            java.util.Arrays.sort(order, (a, b) -> Double.compare(v[b], v[a]));
-            long left = maxParts < 0 ? Long.MAX_VALUE : maxParts;
-            double sum = 0;
-            for (int i : order) {
-                if (v[i] <= 0 || left <= 0) {
-                    break;
-                }
-                long take = Math.min(left, MAX[i]);
-                sum += take * v[i];
-                left -= take;
-            }
-            h[d] = sum;
-        }
-        for (int d = 0; d < k; d++) {
-            int d1 = (d + 1) % k;
-            double t0 = 2 * Math.PI * d / k;
-            double t1 = 2 * Math.PI * (d + 1) / k;
-            double det = Math.sin(t1 - t0);
-            vx[d] = (h[d] * Math.sin(t1) - h[d1] * Math.sin(t0)) / det;
-            vy[d] = (h[d1] * Math.cos(t0) - h[d] * Math.cos(t1)) / det;
-        }
-        return ReachBound.leastImpedance(fixed, w, vx, vy);
+        PowerNetwork fixed = NetworkBuilder.build(ev.scenario(), List.of(), Optional.empty());
+        breakwater.network.SeriesBranch[] unit = c.parts().stream()
+                .map(p -> breakwater.network.PartBranches.single(p, Optional.empty()))
+                .toArray(breakwater.network.SeriesBranch[]::new);
+        return ReachBound.leastImpedanceAt(fixed, unit, MAX, maxParts < 0 ? Long.MAX_VALUE : maxParts, f);
     }
 
     /**
