@@ -23,6 +23,17 @@ class CliTest {
     record Run(int code, String out, String err) {
     }
 
+    /** The 1-based line of {@code file} that starts with {@code start} (the first such). */
+    static int lineOf(java.nio.file.Path file, String start) throws java.io.IOException {
+        java.util.List<String> lines = java.nio.file.Files.readAllLines(file);
+        for (int i = 0; i < lines.size(); i++) {
+            if (lines.get(i).startsWith(start)) {
+                return i + 1;
+            }
+        }
+        throw new AssertionError(start + " not in " + file);
+    }
+
     static Run run(String... args) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         ByteArrayOutputStream err = new ByteArrayOutputStream();

@@ -26,21 +26,11 @@ class InputMessagesCliTest {
                 "StreamReadConstraints", "org.apache", "\tat ", "/tmp/breakwater", ".staging");
     }
 
-    private static int lineOf(Path file, String start) throws IOException {
-        List<String> lines = Files.readAllLines(file);
-        for (int i = 0; i < lines.size(); i++) {
-            if (lines.get(i).startsWith(start)) {
-                return i + 1;
-            }
-        }
-        throw new AssertionError(start + " not in " + file);
-    }
-
     @Test
     void aTableDefinedTwiceNamesBothLines(@TempDir Path dir) throws IOException {
         Path rail = demoCopy(dir, "[band]", "[band]");
         Files.writeString(rail, Files.readString(rail) + "\n[rail]\nname = \"again\"\n");
-        int first = lineOf(rail, "[rail]");
+        int first = CliTest.lineOf(rail, "[rail]");
         int second = Files.readAllLines(rail).size() - 1;
         CliTest.Run r = run("check", rail.toString(), "--bank", DEMO_BANK.toString());
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.INVALID_INPUT);
@@ -52,7 +42,7 @@ class InputMessagesCliTest {
     @Test
     void aKeyGivenTwiceNamesBothLines(@TempDir Path dir) throws IOException {
         Path rail = demoCopy(dir, "max_current = \"5 A\"", "max_current = \"5 A\"\nmax_current = \"6 A\"");
-        int first = lineOf(rail, "max_current = \"5 A\"");
+        int first = CliTest.lineOf(rail, "max_current = \"5 A\"");
         CliTest.Run r = run("check", rail.toString(), "--bank", DEMO_BANK.toString());
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.INVALID_INPUT);
         assertThat(r.err()).contains("rail.toml:" + (first + 1) + ":1: rail.max_current is given twice; first at line "
@@ -64,7 +54,7 @@ class InputMessagesCliTest {
     void invisibleCharactersAreNamedByCodePointAndColumn(@TempDir Path dir) throws IOException {
         // a zero-width space inside a key: the parser alone would say "unknown token"
         Path rail = demoCopy(dir, "max_current = ", "max\u200B_current = ");
-        int line = lineOf(rail, "max\u200B_current");
+        int line = CliTest.lineOf(rail, "max\u200B_current");
         CliTest.Run r = run("check", rail.toString(), "--bank", DEMO_BANK.toString());
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.INVALID_INPUT);
         assertThat(r.err()).contains("rail.toml:" + line + ":4: U+200B (zero-width space) at column 4: an invisible "
@@ -82,7 +72,7 @@ class InputMessagesCliTest {
         // in a catalog's part name: the bank's name no longer matches, and the catalog row is what is wrong
         Path cat = dir.resolve("h/parts.csv");
         Files.writeString(cat, Files.readString(cat).replace("C0402-X5R-1U0-10,", "C0402-X5R-1U0-10\u202F,"));
-        int row = lineOf(cat, "C0402-X5R-1U0-10\u202F");
+        int row = CliTest.lineOf(cat, "C0402-X5R-1U0-10\u202F");
         Path plain = demoCopy(Files.createDirectories(dir.resolve("c")), "[band]", "[band]");
         Files.copy(cat, dir.resolve("c/parts.csv"), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
         CliTest.Run c = run("check", plain.toString(), "--bank", DEMO_BANK.toString());
@@ -103,7 +93,7 @@ class InputMessagesCliTest {
     @Test
     void aNoBreakSpaceBetweenNumberAndUnitIsReadAsASpaceWithAWarning(@TempDir Path dir) throws IOException {
         Path rail = demoCopy(dir, "max_current = \"5 A\"", "max_current = \"5\u00A0A\"");
-        int line = lineOf(rail, "max_current");
+        int line = CliTest.lineOf(rail, "max_current");
         Path out = dir.resolve("out");
         CliTest.Run r = run("check", rail.toString(), "--bank", dir.resolve("drone-core.bank.csv").toString(),
                 "--out", out.toString());
@@ -123,7 +113,7 @@ class InputMessagesCliTest {
     @Test
     void parserLimitsAreSaidInOurWordsWithTheLine(@TempDir Path dir) throws IOException {
         Path deep = demoCopy(dir, "[band]", "nested = " + "[".repeat(3000) + "]".repeat(3000) + "\n[band]");
-        int line = lineOf(deep, "nested");
+        int line = CliTest.lineOf(deep, "nested");
         CliTest.Run r = run("check", deep.toString(), "--bank", DEMO_BANK.toString());
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.INVALID_INPUT);
         assertThat(r.err()).contains("rail.toml:" + line + ": not valid TOML: arrays or inline tables nested too deeply");
@@ -144,7 +134,7 @@ class InputMessagesCliTest {
 
         Path longLine = demoCopy(Files.createDirectories(dir.resolve("l")), "[band]", "# " + "x".repeat(20_000)
                 + "\n[band]");
-        int at = lineOf(longLine, "# xxx");
+        int at = CliTest.lineOf(longLine, "# xxx");
         CliTest.Run l = run("check", longLine.toString(), "--bank", DEMO_BANK.toString());
         assertThat(l.err()).contains("rail.toml:" + at + ":1: line " + at + " is 20002 characters long, more than the "
                 + "10000 an input line may have");
@@ -153,14 +143,14 @@ class InputMessagesCliTest {
     @Test
     void keysFoundWrongAfterReadingCarryTheirPlace(@TempDir Path dir) throws IOException {
         Path margin = demoCopy(dir, "seed = 1", "seed = 1\nmargin = \"60 mV\"");
-        int line = lineOf(margin, "margin");
+        int line = CliTest.lineOf(margin, "margin");
         CliTest.Run m = run("solve", margin.toString(), "--moves", "10", "--solvers", "1");
         assertThat(m.code()).as(m.err()).isEqualTo(ExitCodes.INVALID_INPUT);
         assertThat(m.err()).contains("rail.toml:" + line + ":10: solver.margin 60 mV leaves no room");
 
         Path missing = demoCopy(Files.createDirectories(dir.resolve("e")), "file = \"drone-core.bank.csv\"",
                 "file = \"elsewhere.csv\"");
-        int existing = lineOf(missing, "file = \"elsewhere.csv\"");
+        int existing = CliTest.lineOf(missing, "file = \"elsewhere.csv\"");
         CliTest.Run e = run("trim", missing.toString(), "--moves", "10", "--solvers", "1");
         assertThat(e.code()).as(e.err()).isEqualTo(ExitCodes.INVALID_INPUT);
         assertThat(e.err()).contains("rail.toml:" + existing + ":8: existing.file: bank file not found");
@@ -177,7 +167,7 @@ class InputMessagesCliTest {
         Path unbounded = Files.writeString(dir.resolve("f/rail.toml"), toml);
         CliTest.Run u = run("check", unbounded.toString(), "--bank", DEMO_BANK.toString());
         assertThat(u.code()).as(u.err()).isEqualTo(ExitCodes.INVALID_INPUT);
-        assertThat(u.err()).contains("rail.toml:" + lineOf(unbounded, "[rail]") + ":2: rail.edge_time: with ideal load "
+        assertThat(u.err()).contains("rail.toml:" + CliTest.lineOf(unbounded, "[rail]") + ":2: rail.edge_time: with ideal load "
                 + "edges");
         speaksPlainly(u);
     }
@@ -215,7 +205,7 @@ class InputMessagesCliTest {
         String text = Files.readString(cat);
         String row = text.lines().filter(l -> l.startsWith("C0402-X5R-1U0-10,")).findFirst().orElseThrow();
         Files.writeString(cat, text.replace(row, row.replaceFirst(",\\d+ %,", ",100 %,")));
-        int line = lineOf(cat, "C0402-X5R-1U0-10,");
+        int line = CliTest.lineOf(cat, "C0402-X5R-1U0-10,");
         CliTest.Run r = run("check", rail.toString(), "--bank", dir.resolve("drone-core.bank.csv").toString(),
                 "--monte-carlo", "10");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.INVALID_INPUT);
@@ -230,8 +220,8 @@ class InputMessagesCliTest {
         Files.writeString(both, Files.readString(both).replace("max_distinct = 8", "max_distinct = 8\nmax_per_case = 3"));
         CliTest.Run b = run("check", both.toString(), "--bank", DEMO_BANK.toString());
         assertThat(b.code()).as(b.err()).isEqualTo(ExitCodes.INVALID_INPUT);
-        assertThat(b.err()).contains(":" + lineOf(both, "[board.max_per_case]") + ":1: [board.max_per_case] is defined "
-                + "twice; first at line " + lineOf(both, "max_per_case = 3")).doesNotContain("NUMBER", "non-object");
+        assertThat(b.err()).contains(":" + CliTest.lineOf(both, "[board.max_per_case]") + ":1: [board.max_per_case] is defined "
+                + "twice; first at line " + CliTest.lineOf(both, "max_per_case = 3")).doesNotContain("NUMBER", "non-object");
 
         // a multi-line string never closed
         Path open = demoCopy(Files.createDirectories(dir.resolve("o")), "[band]", "[band]");

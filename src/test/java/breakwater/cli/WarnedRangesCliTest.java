@@ -24,16 +24,6 @@ import static org.assertj.core.api.Assertions.assertThat;
  */
 class WarnedRangesCliTest {
 
-    private static int lineOf(Path file, String start) throws IOException {
-        List<String> lines = Files.readAllLines(file);
-        for (int i = 0; i < lines.size(); i++) {
-            if (lines.get(i).startsWith(start)) {
-                return i + 1;
-            }
-        }
-        throw new AssertionError(start + " not in " + file);
-    }
-
     @Test
     void aCapacitanceBeyondItsCaseAndAnEslFarBelowItAreWarnedAtTheirCells(@TempDir Path dir) throws IOException {
         Path rail = demoCopy(dir, "[band]", "[band]");
@@ -44,8 +34,8 @@ class WarnedRangesCliTest {
                 .replace("C0201-X5R-100N-10,\"100 nF X5R, 0201\",0201,X5R,100n,", "C0201-X5R-100N-10,\"100 nF X5R, 0201\",0201,X5R,100m,")
                 .replace("C0402-X5R-1U0-10,\"1 uF X5R, 0402\",0402,X5R,1u,15 mOhm,0.35 nH,", "C0402-X5R-1U0-10,\"1 uF X5R, 0402\",0402,X5R,1u,15 mOhm,5 pH,");
         Files.writeString(cat, text);
-        int big = lineOf(cat, "C0201-X5R-100N-10,");
-        int small = lineOf(cat, "C0402-X5R-1U0-10,");
+        int big = CliTest.lineOf(cat, "C0201-X5R-100N-10,");
+        int small = CliTest.lineOf(cat, "C0402-X5R-1U0-10,");
         Path out = dir.resolve("out");
         CliTest.Run r = run("check", rail.toString(), "--bank", dir.resolve("drone-core.bank.csv").toString(),
                 "--out", out.toString());
@@ -75,9 +65,9 @@ class WarnedRangesCliTest {
         } catch (breakwater.diagnostic.InputException e) {
             throw new AssertionError(e.getMessage(), e);
         }
-        assertThat(warnings).contains("rail.toml:" + lineOf(rail, "edge_time") + ":13: rail.edge_time 200 µs is slower "
-                        + "than 100 µs", "rail.toml:" + lineOf(rail, "from =") + ":8: band.from 100 Hz is below 1 kHz",
-                "rail.toml:" + lineOf(rail, "to =") + ":6: band.to 3 GHz is above 1 GHz");
+        assertThat(warnings).contains("rail.toml:" + CliTest.lineOf(rail, "edge_time") + ":13: rail.edge_time 200 µs is slower "
+                        + "than 100 µs", "rail.toml:" + CliTest.lineOf(rail, "from =") + ":8: band.from 100 Hz is below 1 kHz",
+                "rail.toml:" + CliTest.lineOf(rail, "to =") + ":6: band.to 3 GHz is above 1 GHz");
     }
 
     @Test
