@@ -186,24 +186,12 @@ public record ReachBound(boolean outOfReach, double frequencyHz, double leastImp
      */
     static double leastImpedance(PowerNetwork fixed, double w, double[] vx, double[] vy) {
         double[] y = new double[2];
-        // the fixed board admittance: regulator, then the fixed board branches (the plane)
-        double r = fixed.regulatorResistanceOhms();
-        double x = w * fixed.regulatorInductanceH();
-        double m = r * r + x * x;
-        double fr = r / m;
-        double fi = -x / m;
-        for (SeriesBranch b : fixed.boardBranches()) {
-            b.admittance(w, y);
-            fr += y[0];
-            fi += y[1];
-        }
-        double lr = 0;
-        double li = 0;
-        for (SeriesBranch b : fixed.loadBranches()) {
-            b.admittance(w, y);
-            lr += y[0];
-            li += y[1];
-        }
+        fixed.fixedBoardAdmittance(w, y); // regulator, then the fixed board branches (the plane)
+        double fr = y[0];
+        double fi = y[1];
+        fixed.loadAdmittance(w, y);
+        double lr = y[0];
+        double li = y[1];
         // the load admittance as a Möbius map of the board admittance W = Y_fixed + Y_bank:
         // g(W) = (a·W + b)/(c·W + d); without a package g = W + Y_load (the load sits on the board node)
         double ar;

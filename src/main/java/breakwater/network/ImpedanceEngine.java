@@ -114,29 +114,14 @@ public final class ImpedanceEngine {
         }
         for (int k = 0; k < n; k++) {
             double w = 2 * Math.PI * grid.at(k);
-            double r = fixedNetwork.regulatorResistanceOhms();
-            double x = w * fixedNetwork.regulatorInductanceH();
-            double m = r * r + x * x;
-            double yr = r / m;
-            double yi = -x / m;
-            for (SeriesBranch b : fixedNetwork.boardBranches()) {
-                b.admittance(w, y);
-                yr += y[0];
-                yi += y[1];
-            }
-            fixedBoardRe[k] = yr;
-            fixedBoardIm[k] = yi;
+            fixedNetwork.fixedBoardAdmittance(w, y);
+            fixedBoardRe[k] = y[0];
+            fixedBoardIm[k] = y[1];
             packageRe[k] = fixedNetwork.packageResistanceOhms();
             packageIm[k] = w * fixedNetwork.packageInductanceH();
-            double lr = 0;
-            double li = 0;
-            for (SeriesBranch b : fixedNetwork.loadBranches()) {
-                b.admittance(w, y);
-                lr += y[0];
-                li += y[1];
-            }
-            fixedLoadRe[k] = lr;
-            fixedLoadIm[k] = li;
+            fixedNetwork.loadAdmittance(w, y);
+            fixedLoadRe[k] = y[0];
+            fixedLoadIm[k] = y[1];
             for (int p = 0; p < parts; p++) {
                 unitParts.get(p).admittance(w, y);
                 unitRe[p][k] = y[0];

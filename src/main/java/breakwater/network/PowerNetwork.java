@@ -187,6 +187,42 @@ public record PowerNetwork(
         out[1] = zi;
     }
 
+    /**
+     * The board node's admittance without any bank or region at ω: the regulator's branch, then
+     * {@code boardBranches} (the plane, the die without a package), summed in that order, into
+     * {@code out[0]} (real) and {@code out[1]} (imaginary). The fast engine and the bound over every bank
+     * start from it.
+     */
+    public void fixedBoardAdmittance(double omega, double[] out) {
+        double r = regulatorResistanceOhms;
+        double x = omega * regulatorInductanceH;
+        double m = r * r + x * x;
+        double yr = r / m;
+        double yi = -x / m;
+        double[] y = new double[2];
+        for (SeriesBranch b : boardBranches) {
+            b.admittance(omega, y);
+            yr += y[0];
+            yi += y[1];
+        }
+        out[0] = yr;
+        out[1] = yi;
+    }
+
+    /** Σ of {@code loadBranches}' admittances at ω (0 without a package), into {@code out}. */
+    public void loadAdmittance(double omega, double[] out) {
+        double yr = 0;
+        double yi = 0;
+        double[] y = new double[2];
+        for (SeriesBranch b : loadBranches) {
+            b.admittance(omega, y);
+            yr += y[0];
+            yi += y[1];
+        }
+        out[0] = yr;
+        out[1] = yi;
+    }
+
     /** |Z| at the load node, Ω. */
     public double magnitude(double frequencyHz) {
         double[] z = new double[2];
